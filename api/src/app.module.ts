@@ -1,0 +1,113 @@
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { PostgreSqlDriver } from '@mikro-orm/postgresql';
+import {
+  type DynamicModule,
+  type MiddlewareConsumer,
+  Module,
+  type NestModule,
+  RequestMethod,
+} from '@nestjs/common';
+import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
+import { json, type RequestHandler } from 'express';
+import { LoggerModule } from 'nestjs-pino';
+import { AuthModule } from './auth/auth.module';
+import { HttpSessionService } from './auth/session/http-session.service';
+import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
+import { CsrfGuard } from './common/guards/csrf.guard';
+import { RolesGuard } from './common/guards/roles.guard';
+import { NoStoreInterceptor } from './common/interceptors/no-store.interceptor';
+import { createValidationPipe } from './common/pipes/validation.pipe';
+import { requestIdFor } from './common/request-id';
+import { AppConfigModule } from './config/app-config.module';
+import { AppConfigService } from './config/app-config.service';
+import { PgPoolModule } from './database/pg-pool.module';
+import { HealthModule } from './health/health.module';
+import { MailModule } from './mail/mail.module';
+import { createOrmConfig } from './mikro-orm.config';
+import { StaffModule } from './staff/staff.module';
+import { UsersModule } from './users/users.module';
+
+/** Every path below the global prefix (Nest 11 / path-to-regexp 8 wildcard). */
+const ALL_ROUTES = { path: '{*path}', method: RequestMethod.ALL };
+
+/**
+ * Runs an Express middleware so that an error it passes to next() is thrown inside Nest and
+ * reaches the global exception filter (with the request id) instead of Express's handlers.
+ */
+function insideNest(handler: RequestHandler): RequestHandler {
+  return (request, response, next) =>
+    new Promise<void>((resolve, reject) => {
+      void handler(request, response, (error?: unknown) => (error ? reject(error) : resolve()));
+    }).then(() => next());
+}
+
+@Module({
+  imports: [
+    LoggerModule.forRootAsync({
+      inject: [AppConfigService],
+      useFactory: (config: AppConfigService) => ({
+        pinoHttp: {
+          level: config.logLevel,
+          genReqId: requestIdFor,
+          customLogLevel: (_request, response, error) =>
+            error || response.statusCode >= 500 ? 'error' : 'info',
+          // Short request lines; cookies and CSRF tokens never reach the log.
+          serializers: {
+            req: (request: { id: unknown; method: string; url: string }) => ({
+              id: request.id,
+              method: request.method,
+              url: request.url,
+            }),
+            res: (response: { statusCode: number }) => ({ statusCode: response.statusCode }),
+          },
+          redact: [
+            'req.headers.cookie',
+            'req.headers["x-csrf-token"]',
+            'res.headers["set-cookie"]',
+          ],
+        },
+        forRoutes: [ALL_ROUTES],
+      }),
+    }),
+    MikroOrmModule.forRootAsync({
+      driver: PostgreSqlDriver,
+      inject: [AppConfigService],
+      useFactory: (config: AppConfigService) => ({
+        ...createOrmConfig(config.databaseUrl),
+        registerRequestContext: true,
+        autoLoadEntities: false,
+      }),
+    }),
+    PgPoolModule,
+    UsersModule,
+    AuthModule,
+    StaffModule,
+    HealthModule,
+    MailModule,
+  ],
+  providers: [
+    { provide: APP_FILTER, useClass: AllExceptionsFilter },
+    { provide: APP_PIPE, useFactory: createValidationPipe },
+    { provide: APP_GUARD, useClass: CsrfGuard },
+    { provide: APP_GUARD, useClass: RolesGuard },
+    { provide: APP_INTERCEPTOR, useClass: NoStoreInterceptor },
+  ],
+})
+export class AppModule implements NestModule {
+  constructor(private readonly sessions: HttpSessionService) {}
+
+  /** The application with its validated configuration (read from the environment now). */
+  static forRoot(): DynamicModule {
+    return { module: AppModule, imports: [AppConfigModule.forRoot()] };
+  }
+
+  /**
+   * After the global request-id logger and the ORM request context: JSON bodies, the session,
+   * its absolute lifetime, then passport (which loads the user inside the request context).
+   */
+  configure(consumer: MiddlewareConsumer): void {
+    consumer
+      .apply(...[json({ limit: '100kb' }), ...this.sessions.middleware()].map(insideNest))
+      .forRoutes(ALL_ROUTES);
+  }
+}

@@ -1,0 +1,7 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { UserResponse } from '../../users/dto/user.response';
+
+export class MeResponse {
+  @ApiProperty({ type: UserResponse })
+  user!: UserResponse;
+}

@@ -1,0 +1,6 @@
+import { EmailField } from './email.field';
+
+export class RequestPasswordResetDto {
+  @EmailField()
+  email!: string;
+}

@@ -1,0 +1,67 @@
+import { Injectable } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { Environment, LogLevel, NodeEnv } from './environment';
+
+/** Typed, already validated settings; the only place that reads ConfigService. */
+@Injectable()
+export class AppConfigService {
+  constructor(private readonly config: ConfigService<Environment, true>) {}
+
+  get nodeEnv(): NodeEnv {
+    return this.config.get('NODE_ENV', { infer: true });
+  }
+
+  get port(): number {
+    return this.config.get('PORT', { infer: true });
+  }
+
+  get host(): string {
+    return this.config.get('HOST', { infer: true });
+  }
+
+  get databaseUrl(): string {
+    return this.config.get('DATABASE_URL', { infer: true });
+  }
+
+  get sessionSecret(): string {
+    return this.config.get('SESSION_SECRET', { infer: true });
+  }
+
+  /** PUBLIC_URL without a trailing slash, ready to have a path appended. */
+  get publicUrl(): string {
+    return this.config.get('PUBLIC_URL', { infer: true }).replace(/\/+$/, '');
+  }
+
+  /** Cookies are marked Secure when the public address is served over https. */
+  get secureCookies(): boolean {
+    return new URL(this.publicUrl).protocol === 'https:';
+  }
+
+  get smtpUrl(): string {
+    return this.config.get('SMTP_URL', { infer: true });
+  }
+
+  get mailFrom(): string {
+    return this.config.get('MAIL_FROM', { infer: true });
+  }
+
+  get webDistDir(): string | undefined {
+    return this.config.get('WEB_DIST_DIR', { infer: true });
+  }
+
+  get logLevel(): LogLevel {
+    return this.config.get('LOG_LEVEL', { infer: true });
+  }
+
+  get sessionIdleMs(): number {
+    return this.config.get('SESSION_IDLE_MINUTES', { infer: true }) * 60_000;
+  }
+
+  get sessionMaxAgeMs(): number {
+    return this.config.get('SESSION_MAX_HOURS', { infer: true }) * 3_600_000;
+  }
+
+  get trustProxy(): boolean {
+    return this.config.get('TRUST_PROXY', { infer: true });
+  }
+}

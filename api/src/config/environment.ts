@@ -1,0 +1,217 @@
+import { existsSync, statSync } from 'node:fs';
+import { join } from 'node:path';
+import { plainToInstance, Transform } from 'class-transformer';
+import {
+  IsBoolean,
+  IsDefined,
+  IsIn,
+  IsInt,
+  IsNotEmpty,
+  IsOptional,
+  IsString,
+  Max,
+  MinLength,
+  Min,
+  ValidateBy,
+  ValidationError,
+  ValidationOptions,
+  validateSync,
+} from 'class-validator';
+
+export const NODE_ENVS = ['development', 'test', 'production'] as const;
+export type NodeEnv = (typeof NODE_ENVS)[number];
+
+export const LOG_LEVELS = ['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent'] as const;
+export type LogLevel = (typeof LOG_LEVELS)[number];
+
+export const DEFAULT_MAIL_FROM = 'Liftwright <no-reply@liftwright.example>';
+
+function hasProtocol(value: unknown, protocols: readonly string[]): boolean {
+  if (typeof value !== 'string') return false;
+  try {
+    const url = new URL(value);
+    return protocols.includes(url.protocol) && url.hostname.length > 0;
+  } catch {
+    return false;
+  }
+}
+
+function IsUrlWithProtocol(protocols: readonly string[], options: ValidationOptions) {
+  return ValidateBy(
+    {
+      name: 'isUrlWithProtocol',
+      validator: { validate: (value: unknown) => hasProtocol(value, protocols) },
+    },
+    options,
+  );
+}
+
+function IsFolderWithIndexHtml(options: ValidationOptions) {
+  return ValidateBy(
+    {
+      name: 'isFolderWithIndexHtml',
+      validator: {
+        validate: (value: unknown) =>
+          typeof value === 'string' &&
+          existsSync(value) &&
+          statSync(value).isDirectory() &&
+          existsSync(join(value, 'index.html')),
+      },
+    },
+    options,
+  );
+}
+
+/** A whole number written in decimal digits, or NaN so that @IsInt reports it. */
+function toWholeNumber({ value }: { value: unknown }): unknown {
+  if (typeof value === 'number') return value;
+  if (typeof value === 'string' && /^\d+$/.test(value.trim())) return Number(value.trim());
+  return value === undefined ? undefined : Number.NaN;
+}
+
+function toBoolean({ value }: { value: unknown }): unknown {
+  if (typeof value === 'boolean') return value;
+  if (typeof value !== 'string') return value;
+  const normalised = value.trim().toLowerCase();
+  if (normalised === 'true' || normalised === '1') return true;
+  if (normalised === 'false' || normalised === '0') return false;
+  return value;
+}
+
+/** The part of the environment the database tools (migrations, seeder) need. */
+export class DatabaseEnvironment {
+  @IsDefined({ message: '$property is required' })
+  @IsUrlWithProtocol(['postgres:', 'postgresql:'], {
+    message: '$property must be a postgres:// URL',
+  })
+  DATABASE_URL!: string;
+}
+
+/** Every variable the API reads, validated once at start-up. */
+export class Environment extends DatabaseEnvironment {
+  @IsIn(NODE_ENVS, { message: `$property must be one of ${NODE_ENVS.join(', ')}` })
+  NODE_ENV: NodeEnv = 'development';
+
+  @Transform(toWholeNumber)
+  @IsInt({ message: '$property must be a whole number between 1 and 65535' })
+  @Min(1, { message: '$property must be a whole number between 1 and 65535' })
+  @Max(65535, { message: '$property must be a whole number between 1 and 65535' })
+  PORT = 4400;
+
+  /** The address to listen on: loopback by default; 0.0.0.0 behind a load balancer. */
+  @IsString({ message: '$property must be text' })
+  @IsNotEmpty({ message: '$property must not be empty' })
+  HOST = '127.0.0.1';
+
+  @IsDefined({ message: '$property is required' })
+  @IsString({ message: '$property must be text' })
+  @MinLength(32, { message: '$property must be at least 32 characters' })
+  SESSION_SECRET!: string;
+
+  @IsDefined({ message: '$property is required' })
+  @IsUrlWithProtocol(['http:', 'https:'], {
+    message: '$property must be an http:// or https:// URL',
+  })
+  PUBLIC_URL!: string;
+
+  @IsDefined({ message: '$property is required' })
+  @IsUrlWithProtocol(['smtp:', 'smtps:'], {
+    message: '$property must be an smtp:// or smtps:// URL',
+  })
+  SMTP_URL!: string;
+
+  @IsString({ message: '$property must be text' })
+  @IsNotEmpty({ message: '$property must not be empty' })
+  MAIL_FROM = DEFAULT_MAIL_FROM;
+
+  @IsOptional()
+  @IsFolderWithIndexHtml({ message: '$property must be a folder that contains index.html' })
+  WEB_DIST_DIR?: string;
+
+  @IsIn(LOG_LEVELS, { message: `$property must be one of ${LOG_LEVELS.join(', ')}` })
+  LOG_LEVEL!: LogLevel;
+
+  @Transform(toWholeNumber)
+  @IsInt({ message: '$property must be a whole number of minutes between 1 and 1440' })
+  @Min(1, { message: '$property must be a whole number of minutes between 1 and 1440' })
+  @Max(1440, { message: '$property must be a whole number of minutes between 1 and 1440' })
+  SESSION_IDLE_MINUTES = 30;
+
+  @Transform(toWholeNumber)
+  @IsInt({ message: '$property must be a whole number of hours between 1 and 720' })
+  @Min(1, { message: '$property must be a whole number of hours between 1 and 720' })
+  @Max(720, { message: '$property must be a whole number of hours between 1 and 720' })
+  SESSION_MAX_HOURS = 12;
+
+  @Transform(toBoolean)
+  @IsBoolean({ message: '$property must be true or false' })
+  TRUST_PROXY = false;
+}
+
+type RawEnvironment = Record<string, unknown>;
+
+/** Keep only the variables the class declares; an empty value counts as not set. */
+function pick(raw: RawEnvironment, keys: readonly string[]): RawEnvironment {
+  const picked: RawEnvironment = {};
+  for (const key of keys) {
+    const value = raw[key];
+    if (value !== undefined && !(typeof value === 'string' && value.trim() === '')) {
+      picked[key] = value;
+    }
+  }
+  return picked;
+}
+
+function describeErrors(errors: ValidationError[]): string {
+  const messages = errors.flatMap((error) => {
+    const constraints = Object.values(error.constraints ?? {});
+    // One message per variable: the first failing rule is the one to fix.
+    return constraints.length > 0 ? [constraints[0]] : [];
+  });
+  return `Configuration error: ${messages.join('; ')}`;
+}
+
+const ENVIRONMENT_KEYS = [
+  'NODE_ENV',
+  'PORT',
+  'HOST',
+  'DATABASE_URL',
+  'SESSION_SECRET',
+  'PUBLIC_URL',
+  'SMTP_URL',
+  'MAIL_FROM',
+  'WEB_DIST_DIR',
+  'LOG_LEVEL',
+  'SESSION_IDLE_MINUTES',
+  'SESSION_MAX_HOURS',
+  'TRUST_PROXY',
+] as const;
+
+/**
+ * The validate function given to ConfigModule: returns the typed environment or throws an Error
+ * whose message names every variable that is missing or wrong.
+ */
+export function validateEnvironment(raw: RawEnvironment): Environment {
+  const values = pick(raw, ENVIRONMENT_KEYS);
+  if (values.LOG_LEVEL === undefined) {
+    values.LOG_LEVEL = values.NODE_ENV === 'test' ? 'warn' : 'info';
+  }
+  const environment = plainToInstance(Environment, values, { exposeDefaultValues: true });
+  const errors = validateSync(environment, {
+    stopAtFirstError: true,
+    validationError: { target: false },
+  });
+  if (errors.length > 0) throw new Error(describeErrors(errors));
+  return environment;
+}
+
+/** Validates only DATABASE_URL, for the migration and seed commands. */
+export function validateDatabaseEnvironment(raw: RawEnvironment): DatabaseEnvironment {
+  const environment = plainToInstance(DatabaseEnvironment, pick(raw, ['DATABASE_URL']));
+  const errors = validateSync(environment, {
+    stopAtFirstError: true,
+    validationError: { target: false },
+  });
+  if (errors.length > 0) throw new Error(describeErrors(errors));
+  return environment;
+}

@@ -1,0 +1,11 @@
+import type { MigrationObject } from '@mikro-orm/core';
+import { Migration20261201220656 } from './migrations/Migration20261201220656';
+
+/**
+ * Every migration, oldest first. Listed explicitly (rather than found by a file glob) so the same
+ * list runs from dist, from the TypeScript sources under Vitest and from the CLI; a unit test
+ * fails when a file in migrations/ is missing here.
+ */
+export const MIGRATIONS: MigrationObject[] = [
+  { name: 'Migration20261201220656', class: Migration20261201220656 },
+];

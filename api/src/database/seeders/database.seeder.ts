@@ -1,0 +1,10 @@
+import type { EntityManager } from '@mikro-orm/core';
+import { Seeder } from '@mikro-orm/seeder';
+import { DemoUsersSeeder } from './demo-users.seeder';
+
+/** Demo data only; running it again changes nothing. */
+export class DatabaseSeeder extends Seeder {
+  run(em: EntityManager): Promise<void> {
+    return this.call(em, [DemoUsersSeeder]);
+  }
+}

@@ -1,0 +1,38 @@
+import { Injectable, Logger, type OnApplicationShutdown } from '@nestjs/common';
+import { createTransport, type Transporter } from 'nodemailer';
+import { AppConfigService } from '../config/app-config.service';
+import type { MailContent } from './templates/password-reset.mail';
+
+/** Sends e-mail through the SMTP server named by SMTP_URL. */
+@Injectable()
+export class MailService implements OnApplicationShutdown {
+  private readonly logger = new Logger(MailService.name);
+  private readonly transport: Transporter;
+
+  constructor(private readonly config: AppConfigService) {
+    this.transport = createTransport(config.smtpUrl);
+  }
+
+  async send(to: string, content: MailContent): Promise<void> {
+    await this.transport.sendMail({
+      from: this.config.mailFrom,
+      to,
+      subject: content.subject,
+      text: content.text,
+      html: content.html,
+    });
+  }
+
+  /** Sends without making the caller wait; a failure is logged, not thrown. */
+  sendInBackground(to: string, content: MailContent): void {
+    this.send(to, content).catch((error: unknown) => {
+      this.logger.error(
+        `Could not send "${content.subject}": ${error instanceof Error ? error.message : String(error)}`,
+      );
+    });
+  }
+
+  onApplicationShutdown(): void {
+    this.transport.close();
+  }
+}

@@ -1,0 +1,53 @@
+import { join } from 'node:path';
+import { Migrator } from '@mikro-orm/migrations';
+import { defineConfig, type Options } from '@mikro-orm/postgresql';
+import { SeedManager } from '@mikro-orm/seeder';
+import { AuthThrottleCounter } from './auth/entities/auth-throttle-counter.entity';
+import { HttpSession } from './auth/entities/http-session.entity';
+import { PasswordResetToken } from './auth/entities/password-reset-token.entity';
+import { validateDatabaseEnvironment } from './config/environment';
+import { MIGRATIONS } from './database/migrations-list';
+import { User } from './users/entities/user.entity';
+
+/**
+ * The one ORM configuration, used by MikroOrmModule.forRootAsync, by database/cli.ts and by the
+ * MikroORM CLI (default export). The schema changes only through migrations: nothing here
+ * creates or updates tables at start-up. `writeSnapshot: false` for commands that only run
+ * migrations.
+ */
+export function createOrmConfig(databaseUrl: string, { writeSnapshot = true } = {}): Options {
+  return defineConfig({
+    clientUrl: databaseUrl,
+    entities: [User, PasswordResetToken, HttpSession, AuthThrottleCounter],
+    forceUtcTimezone: true,
+    ensureDatabase: false,
+    debug: false,
+    extensions: [Migrator, SeedManager],
+    migrations: {
+      tableName: 'mikro_orm_migrations',
+      // Compiled migrations run from dist; new ones are written as TypeScript into src.
+      path: join(__dirname, 'database', 'migrations'),
+      pathTs: join(__dirname, '..', 'src', 'database', 'migrations'),
+      emit: 'ts',
+      // The snapshot changes only when a migration is created (running migrations would
+      // otherwise rewrite the committed file from the database).
+      snapshot: writeSnapshot,
+      snapshotName: '.snapshot-liftwright',
+      migrationsList: MIGRATIONS,
+      transactional: true,
+      allOrNothing: true,
+      dropTables: true,
+      safe: false,
+    },
+    seeder: {
+      path: join(__dirname, 'database', 'seeders'),
+      pathTs: join(__dirname, '..', 'src', 'database', 'seeders'),
+      defaultSeeder: 'DatabaseSeeder',
+    },
+  });
+}
+
+/** For the MikroORM CLI (`npx mikro-orm ...` in api/, after a build): reads DATABASE_URL. */
+export default function ormConfigFromEnvironment(): Options {
+  return createOrmConfig(validateDatabaseEnvironment(process.env).DATABASE_URL);
+}
