@@ -1,15 +1,17 @@
 // @ts-check
-import { readdirSync } from 'node:fs';
+import { existsSync, readdirSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import reactHooks from 'eslint-plugin-react-hooks';
 
 /** The web client's feature folders; each may use shared code but not another feature. */
-const webFeatures = readdirSync(new URL('./web/src/features', import.meta.url), {
-  withFileTypes: true,
-})
-  .filter((entry) => entry.isDirectory())
-  .map((entry) => entry.name);
+const webFeaturesDir = fileURLToPath(import.meta.resolve('./web/src/features'));
+const webFeatures = existsSync(webFeaturesDir)
+  ? readdirSync(webFeaturesDir, { withFileTypes: true })
+      .filter((entry) => entry.isDirectory())
+      .map((entry) => entry.name)
+  : [];
 
 export default tseslint.config(
   { ignores: ['**/node_modules/**', '**/dist/**', '.data/**', 'e2e/artifacts/**'] },

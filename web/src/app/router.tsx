@@ -1,0 +1,125 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { useQueryClient } from '@tanstack/react-query';
+import { useMemo, type ComponentType } from 'react';
+import {
+  createBrowserRouter,
+  Outlet,
+  ScrollRestoration,
+  type LoaderFunction,
+  type RouteObject,
+} from 'react-router';
+// The DOM flavour of the provider, so navigations can ask for ReactDOM.flushSync.
+import { RouterProvider } from 'react-router/dom';
+import { RouteError } from '@/components/errors/route-error';
+import { LoadingScreen } from '@/components/ui/loading-screen';
+import { paths } from '@/config/paths';
+
+/** What a lazy route module exports: its page, and optionally a loader that warms the cache. */
+interface RouteModule {
+  default: ComponentType;
+  clientLoader?: (queryClient: QueryClient) => LoaderFunction;
+}
+
+function lazyRoute(queryClient: QueryClient, load: () => Promise<RouteModule>) {
+  return async () => {
+    const module = await load();
+    return {
+      Component: module.default,
+      ...(module.clientLoader ? { loader: module.clientLoader(queryClient) } : {}),
+    };
+  };
+}
+
+function Root() {
+  return (
+    <>
+      <Outlet />
+      <ScrollRestoration />
+    </>
+  );
+}
+
+/** Pages of a signed-in area sit under one error boundary, so the area's frame stays up. */
+function areaPages(children: RouteObject[]): RouteObject[] {
+  return [{ errorElement: <RouteError />, children }];
+}
+
+export function createAppRouter(queryClient: QueryClient) {
+  const lazy = (load: () => Promise<RouteModule>) => lazyRoute(queryClient, load);
+  const notFound = (): RouteObject => ({
+    path: '*',
+    lazy: lazy(() => import('./routes/not-found')),
+  });
+
+  return createBrowserRouter([
+    {
+      Component: Root,
+      errorElement: <RouteError />,
+      hydrateFallbackElement: <LoadingScreen />,
+      children: [
+        {
+          lazy: lazy(() => import('./routes/public/layout')),
+          children: areaPages([
+            { index: true, lazy: lazy(() => import('./routes/public/home')) },
+            { path: paths.plan.path, lazy: lazy(() => import('./routes/public/plan')) },
+            { path: paths.auth.signIn.path, lazy: lazy(() => import('./routes/public/sign-in')) },
+            {
+              path: paths.auth.register.path,
+              lazy: lazy(() => import('./routes/public/register')),
+            },
+            {
+              path: paths.auth.forgotPassword.path,
+              lazy: lazy(() => import('./routes/public/forgot-password')),
+            },
+            {
+              path: paths.auth.resetPassword.path,
+              lazy: lazy(() => import('./routes/public/reset-password')),
+            },
+            notFound(),
+          ]),
+        },
+        {
+          path: paths.account.home.path,
+          lazy: lazy(() => import('./routes/account/layout')),
+          children: areaPages([
+            { index: true, lazy: lazy(() => import('./routes/account/home')) },
+            notFound(),
+          ]),
+        },
+        {
+          path: paths.desk.home.path,
+          lazy: lazy(() => import('./routes/desk/layout')),
+          children: areaPages([
+            { index: true, lazy: lazy(() => import('./routes/desk/home')) },
+            notFound(),
+          ]),
+        },
+        {
+          path: paths.workshop.home.path,
+          lazy: lazy(() => import('./routes/workshop/layout')),
+          children: areaPages([
+            { index: true, lazy: lazy(() => import('./routes/workshop/home')) },
+            notFound(),
+          ]),
+        },
+        {
+          path: paths.manage.home.path,
+          lazy: lazy(() => import('./routes/manage/layout')),
+          children: areaPages([
+            { index: true, lazy: lazy(() => import('./routes/manage/home')) },
+            { path: paths.manage.staff.path, lazy: lazy(() => import('./routes/manage/staff')) },
+            notFound(),
+          ]),
+        },
+      ],
+    },
+  ]);
+}
+
+export function AppRouter() {
+  const queryClient = useQueryClient();
+  const router = useMemo(() => createAppRouter(queryClient), [queryClient]);
+  // Router updates are committed as ordinary (not transition) renders: once the address bar
+  // shows the new page, its content is on screen in the same task, with no stale frame between.
+  return <RouterProvider router={router} useTransitions={false} />;
+}

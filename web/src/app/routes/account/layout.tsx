@@ -1,0 +1,19 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { CustomerLayout } from '@/components/layouts/customer-layout';
+import { areaRoles } from '@/config/roles';
+import { RequireRole } from '@/features/auth/components/require-role';
+import { SignedInFrame } from '@/app/signed-in-frame';
+import { warmSession } from '@/app/warm-session';
+
+export const clientLoader = (queryClient: QueryClient) => async () => {
+  await warmSession(queryClient);
+  return null;
+};
+
+export default function AccountArea() {
+  return (
+    <RequireRole allow={areaRoles.account}>
+      <SignedInFrame layout={CustomerLayout} />
+    </RequireRole>
+  );
+}

@@ -1,0 +1,20 @@
+import { useEffect, useRef } from 'react';
+import { useLocation, useNavigationType } from 'react-router';
+
+/**
+ * Moves focus to the main region after an in-app navigation (a link, a redirect after sign-in),
+ * so keyboard and screen-reader users start at the new page's content instead of the link they
+ * left behind. The first page load and back/forward ("POP") leave focus where the browser puts it.
+ */
+export function useFocusMainOnNavigate<T extends HTMLElement>() {
+  const mainRef = useRef<T>(null);
+  const { pathname } = useLocation();
+  const navigationType = useNavigationType();
+
+  useEffect(() => {
+    if (navigationType === 'POP') return;
+    mainRef.current?.focus({ preventScroll: true });
+  }, [pathname, navigationType]);
+
+  return mainRef;
+}

@@ -1,0 +1,4 @@
+/** Sets the browser tab's title for the current page (React hoists <title> into <head>). */
+export function DocumentTitle({ title }: { title: string }) {
+  return <title>{`${title} · Liftwright`}</title>;
+}

@@ -1,0 +1,52 @@
+/** Every route of the web client, with the href builder the links use. */
+
+function withQuery(path: string, query: Record<string, string | null | undefined>): string {
+  const search = new URLSearchParams();
+  for (const [key, value] of Object.entries(query)) if (value) search.set(key, value);
+  const text = search.toString();
+  return text ? `${path}?${text}` : path;
+}
+
+export const paths = {
+  home: { path: '/', getHref: () => '/' },
+  plan: { path: '/plan', getHref: () => '/plan' },
+  auth: {
+    signIn: {
+      path: '/sign-in',
+      getHref: (redirectTo?: string | null) => withQuery('/sign-in', { redirectTo }),
+    },
+    register: {
+      path: '/register',
+      getHref: (redirectTo?: string | null) => withQuery('/register', { redirectTo }),
+    },
+    forgotPassword: { path: '/forgot-password', getHref: () => '/forgot-password' },
+    resetPassword: {
+      path: '/reset-password',
+      getHref: (token: string) => withQuery('/reset-password', { token }),
+    },
+  },
+  account: {
+    home: { path: '/account', getHref: () => '/account' },
+  },
+  desk: {
+    home: { path: '/desk', getHref: () => '/desk' },
+  },
+  workshop: {
+    home: { path: '/workshop', getHref: () => '/workshop' },
+  },
+  manage: {
+    home: { path: '/manage', getHref: () => '/manage' },
+    staff: { path: '/manage/staff', getHref: () => '/manage/staff' },
+  },
+} as const;
+
+/**
+ * A return path from the query string, accepted only when it stays on this site (a relative
+ * path, not "//host"), so a crafted link cannot send someone elsewhere after signing in.
+ */
+export function safeRedirectPath(value: string | null | undefined): string | null {
+  if (!value || !value.startsWith('/') || value.startsWith('//') || value.startsWith('/\\')) {
+    return null;
+  }
+  return value;
+}

@@ -1,0 +1,19 @@
+import '@fontsource/roboto/300.css';
+import '@fontsource/roboto/400.css';
+import '@fontsource/roboto/500.css';
+import '@fontsource/roboto/700.css';
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { AppProvider } from '@/app/provider';
+import { AppRouter } from '@/app/router';
+
+const container = document.getElementById('root');
+if (!container) throw new Error('The page has no #root element to render into.');
+
+createRoot(container).render(
+  <StrictMode>
+    <AppProvider>
+      <AppRouter />
+    </AppProvider>
+  </StrictMode>,
+);
