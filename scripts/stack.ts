@@ -310,7 +310,8 @@ async function testStack(): Promise<never> {
   checks.push({ name: 'lint', code: await run('npm', ['run', '--silent', 'lint']) });
 
   startedPostgres = await postgres.ensureRunning(pg);
-  const testEnv = apiEnv('liftwright_test', ports, appUrl, 'test');
+  // The API suite builds its app in-process and serves no web build.
+  const testEnv = { ...apiEnv('liftwright_test', ports, appUrl, 'test'), WEB_DIST_DIR: undefined };
   results.push(await vitestSuite('api', 'api', testEnv));
 
   try {
