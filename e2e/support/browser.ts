@@ -41,6 +41,8 @@ export async function screenshot(page: Page, journey: string, name: string): Pro
   mkdirSync(dir, { recursive: true });
   const size = page.viewportSize();
   const path = join(dir, `${name}-${size ? `${size.width}x${size.height}` : 'page'}.png`);
+  // From the top, so that the fixed app bar sits where a person sees it.
+  await page.evaluate(() => window.scrollTo(0, 0));
   await page.screenshot({ path, fullPage: true });
   return path;
 }
