@@ -11,6 +11,7 @@ import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
 import { json, type RequestHandler } from 'express';
 import { LoggerModule } from 'nestjs-pino';
 import { AuthModule } from './auth/auth.module';
+import { CatalogueModule } from './catalogue/catalogue.module';
 import { HttpSessionService } from './auth/session/http-session.service';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
 import { CsrfGuard } from './common/guards/csrf.guard';
@@ -20,12 +21,16 @@ import { createValidationPipe } from './common/pipes/validation.pipe';
 import { requestIdFor } from './common/request-id';
 import { AppConfigModule } from './config/app-config.module';
 import { AppConfigService } from './config/app-config.service';
+import { CustomerVehiclesModule } from './customer-vehicles/customer-vehicles.module';
 import { PgPoolModule } from './database/pg-pool.module';
+import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { createOrmConfig } from './mikro-orm.config';
+import { RuleSetsModule } from './rule-sets/rule-sets.module';
 import { StaffModule } from './staff/staff.module';
 import { UsersModule } from './users/users.module';
+import { VehiclesModule } from './vehicles/vehicles.module';
 
 /** Every path below the global prefix (Nest 11 / path-to-regexp 8 wildcard). */
 const ALL_ROUTES = { path: '{*path}', method: RequestMethod.ALL };
@@ -84,6 +89,11 @@ function insideNest(handler: RequestHandler): RequestHandler {
     StaffModule,
     HealthModule,
     MailModule,
+    VehiclesModule,
+    CustomerVehiclesModule,
+    CatalogueModule,
+    RuleSetsModule,
+    FitReportsModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

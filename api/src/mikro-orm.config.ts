@@ -5,9 +5,14 @@ import { SeedManager } from '@mikro-orm/seeder';
 import { AuthThrottleCounter } from './auth/entities/auth-throttle-counter.entity';
 import { HttpSession } from './auth/entities/http-session.entity';
 import { PasswordResetToken } from './auth/entities/password-reset-token.entity';
+import { Product } from './catalogue/entities/product.entity';
 import { validateDatabaseEnvironment } from './config/environment';
+import { CustomerVehicle } from './customer-vehicles/entities/customer-vehicle.entity';
 import { MIGRATIONS } from './database/migrations-list';
+import { RuleSet } from './rule-sets/entities/rule-set.entity';
 import { User } from './users/entities/user.entity';
+import { StockWheel } from './vehicles/entities/stock-wheel.embeddable';
+import { VehicleModel } from './vehicles/entities/vehicle-model.entity';
 
 /**
  * The one ORM configuration, used by MikroOrmModule.forRootAsync, by database/cli.ts and by the
@@ -18,7 +23,17 @@ import { User } from './users/entities/user.entity';
 export function createOrmConfig(databaseUrl: string, { writeSnapshot = true } = {}): Options {
   return defineConfig({
     clientUrl: databaseUrl,
-    entities: [User, PasswordResetToken, HttpSession, AuthThrottleCounter],
+    entities: [
+      User,
+      PasswordResetToken,
+      HttpSession,
+      AuthThrottleCounter,
+      VehicleModel,
+      StockWheel,
+      CustomerVehicle,
+      Product,
+      RuleSet,
+    ],
     forceUtcTimezone: true,
     ensureDatabase: false,
     debug: false,

@@ -14,6 +14,53 @@ const DOCUMENTATION_PREFIX = '/api/docs';
 
 const DENIED = new Set([401, 403]);
 
+const STAFF: Principal[] = ['desk', 'tech', 'manager'];
+const SIGNED_IN: Principal[] = ['customer', ...STAFF];
+
+/**
+ * Who each route is meant for, written out by hand: a route whose declared access differs (or
+ * a new route missing here) fails, so access is always a decision someone wrote down.
+ */
+const INTENDED_ACCESS: Record<string, Principal[]> = {
+  'GET /api/auth/csrf': PRINCIPALS,
+  'POST /api/auth/register': PRINCIPALS,
+  'POST /api/auth/sign-in': PRINCIPALS,
+  'POST /api/auth/sign-out': PRINCIPALS,
+  'GET /api/auth/me': SIGNED_IN,
+  'POST /api/auth/password-reset': PRINCIPALS,
+  'POST /api/auth/password-reset/confirm': PRINCIPALS,
+  'GET /api/staff': ['manager'],
+  'POST /api/staff': ['manager'],
+  'PATCH /api/staff/:id': ['manager'],
+  'GET /api/health/live': PRINCIPALS,
+  'GET /api/health/ready': PRINCIPALS,
+  // Issue 3: catalogue, vehicle specifications and the fit report.
+  'GET /api/vehicle-models': PRINCIPALS,
+  'GET /api/vehicle-models/makes': PRINCIPALS,
+  'GET /api/vehicle-models/:id': PRINCIPALS,
+  'POST /api/vehicle-models': ['manager'],
+  'PATCH /api/vehicle-models/:id': ['manager'],
+  'GET /api/my/vehicles': ['customer'],
+  'POST /api/my/vehicles': ['customer'],
+  'PATCH /api/my/vehicles/:id': ['customer'],
+  'GET /api/products': PRINCIPALS,
+  'GET /api/products/:id': PRINCIPALS,
+  'POST /api/products': ['manager'],
+  'PATCH /api/products/:id': ['manager'],
+  'POST /api/catalogue/import/preview': ['manager'],
+  'POST /api/catalogue/import/apply': ['manager'],
+  'GET /api/catalogue/export.csv': ['manager'],
+  'GET /api/fitment/tyre-size': PRINCIPALS,
+  'POST /api/fitment/check': PRINCIPALS,
+  'GET /api/rule-sets': ['desk', 'manager'],
+  'GET /api/rule-sets/:id': ['desk', 'manager'],
+  'PATCH /api/rule-sets/:id': ['manager'],
+};
+
+function sorted(principals: Principal[]): string {
+  return PRINCIPALS.filter((principal) => principals.includes(principal)).join(', ');
+}
+
 function allowedFor(route: DeclaredRoute): Principal[] {
   if (route.rule.kind === 'public') return PRINCIPALS;
   if (route.rule.kind === 'roles')
@@ -54,6 +101,16 @@ describe('role matrix: every route answers exactly the roles it declares', () =>
       .filter((route) => route.rule.kind === 'none')
       .map((route) => `${route.method} ${route.path} (${route.handler})`);
     expect(undecided, 'routes without @Public() or @Roles(...)').toEqual([]);
+  });
+
+  it('declares on every route the access it is meant to have', () => {
+    const declared = Object.fromEntries(
+      routes.map((route) => [`${route.method} ${route.path}`, sorted(allowedFor(route))]),
+    );
+    const intended = Object.fromEntries(
+      Object.entries(INTENDED_ACCESS).map(([route, principals]) => [route, sorted(principals)]),
+    );
+    expect(declared).toEqual(intended);
   });
 
   it('lets in exactly the declared principals on every route', async () => {
@@ -97,5 +154,16 @@ describe('role matrix: every route answers exactly the roles it declares', () =>
     const paths = Object.keys((document.body as { paths: Record<string, unknown> }).paths);
     const documented = routes.map((route) => route.path.replace(/:([A-Za-z]+)/g, '{$1}'));
     expect([...new Set(documented)].sort()).toEqual(paths.sort());
+  });
+
+  it('documents every schema the OpenAPI document refers to', async () => {
+    const document = await request(testApp.server).get('/api/docs-json').expect(200);
+    const body = document.body as { components: { schemas: Record<string, unknown> } };
+    const refs = [
+      ...JSON.stringify(body).matchAll(/"\$ref":"#\/components\/schemas\/([^"]+)"/g),
+    ].map((match) => match[1]);
+    expect(refs.length).toBeGreaterThan(0);
+    const missing = [...new Set(refs)].filter((name) => !(name in body.components.schemas));
+    expect(missing).toEqual([]);
   });
 });

@@ -1,5 +1,6 @@
 import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201220656 } from './migrations/Migration20261201220656';
+import { Migration20261201225254 } from './migrations/Migration20261201225254';
 
 /**
  * Every migration, oldest first. Listed explicitly (rather than found by a file glob) so the same
@@ -8,4 +9,5 @@ import { Migration20261201220656 } from './migrations/Migration20261201220656';
  */
 export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201220656', class: Migration20261201220656 },
+  { name: 'Migration20261201225254', class: Migration20261201225254 },
 ];

@@ -8,3 +8,11 @@ export const CurrentUser = createParamDecorator((_data: unknown, context: Execut
   if (!(request.user instanceof User)) throw new UnauthorizedException('Sign in to continue');
   return request.user;
 });
+
+/** On a @Public() route: the signed-in user, or null for a visitor. */
+export const OptionalCurrentUser = createParamDecorator(
+  (_data: unknown, context: ExecutionContext): User | null => {
+    const request = context.switchToHttp().getRequest<Request>();
+    return request.user instanceof User ? request.user : null;
+  },
+);

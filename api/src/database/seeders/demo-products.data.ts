@@ -1,0 +1,833 @@
+/**
+ * Demo catalogue of Kestrelmere 4x4 & Tyre. Every brand is invented (Bramblerock and Tarnhill
+ * suspension, Ironwattle and Scrubline wheels, Quendra and Saltpan tyres, Diffwell driveline
+ * parts; services under the workshop's own name). Prices are in AUD cents, tax included.
+ */
+import type { ProductFields } from '../../catalogue/entities/product.entity';
+import type { DemoVehicleKey } from './demo-vehicle-models.data';
+
+export interface DemoProduct extends Omit<ProductFields, 'active'> {
+  description: string;
+  /** Empty: any vehicle. */
+  fits: DemoVehicleKey[];
+}
+
+const IFS: DemoVehicleKey[] = ['strata-sr', 'strata-workmate', 'barrow-glx', 'outrider-gxl'];
+const LEAF_REAR: DemoVehicleKey[] = ['strata-sr', 'strata-workmate', 'barrow-glx', 'quarry-79'];
+const SOLID_FRONT: DemoVehicleKey[] = ['quarry-76', 'quarry-79', 'highrange'];
+
+interface KitSpec {
+  sku: string;
+  brand: string;
+  family: string;
+  liftMm: number;
+  load: 'light' | 'medium' | 'heavy';
+  priceCents: number;
+  stockQty: number;
+  leadDays: number;
+  fits: DemoVehicleKey[];
+  includesGreasableShackles?: boolean;
+  includesExtendedBrakeLines?: boolean;
+  keepsTwoThirdsTravel?: boolean;
+}
+
+const LOAD_RANGES = {
+  light: { min: 0, max: 150, text: 'light load (0–150 kg)' },
+  medium: { min: 150, max: 300, text: 'medium load (150–300 kg)' },
+  heavy: { min: 300, max: 600, text: 'heavy load (300–600 kg)' },
+} as const;
+
+function kit(spec: KitSpec): DemoProduct {
+  const load = LOAD_RANGES[spec.load];
+  return {
+    sku: spec.sku,
+    kind: 'suspension-kit',
+    name: `${spec.family} ${spec.liftMm} mm lift kit, ${load.text}`,
+    brand: spec.brand,
+    description: `Struts or coils, rear springs and shocks for a ${spec.liftMm} mm lift, rated for a constant load of ${load.min}–${load.max} kg.`,
+    priceCents: spec.priceCents,
+    labourMinutes: spec.liftMm > 50 ? 330 : 270,
+    bayKind: 'hoist',
+    stockQty: spec.stockQty,
+    leadDays: spec.leadDays,
+    attributes: {
+      frontLiftMm: spec.liftMm,
+      rearLiftMm: spec.liftMm,
+      constantLoadMinKg: load.min,
+      constantLoadMaxKg: load.max,
+      keepsTwoThirdsTravel: spec.keepsTwoThirdsTravel ?? true,
+      includesGreasableShackles: spec.includesGreasableShackles ?? false,
+      includesExtendedBrakeLines: spec.includesExtendedBrakeLines ?? false,
+    },
+    fits: spec.fits,
+  };
+}
+
+interface WheelSpecRow {
+  sku: string;
+  brand: string;
+  range: string;
+  diameterIn: number;
+  widthIn: number;
+  offsetMm: number;
+  boltPattern: string;
+  centreBoreMm: number;
+  studThread: string;
+  loadRatingKg: number;
+  priceCents: number;
+  stockQty: number;
+  leadDays: number;
+}
+
+function signed(offsetMm: number): string {
+  return offsetMm > 0 ? `+${offsetMm}` : offsetMm < 0 ? `−${-offsetMm}` : '0';
+}
+
+function wheel(spec: WheelSpecRow): DemoProduct {
+  return {
+    sku: spec.sku,
+    kind: 'wheel',
+    name: `${spec.range} ${spec.diameterIn}x${spec.widthIn} ET${signed(spec.offsetMm)}, ${spec.boltPattern}`,
+    brand: spec.brand,
+    description: `Cast alloy, ${spec.centreBoreMm} mm centre bore, rated ${spec.loadRatingKg} kg per wheel. Priced each.`,
+    priceCents: spec.priceCents,
+    labourMinutes: 0,
+    bayKind: null,
+    stockQty: spec.stockQty,
+    leadDays: spec.leadDays,
+    attributes: {
+      diameterIn: spec.diameterIn,
+      widthIn: spec.widthIn,
+      offsetMm: spec.offsetMm,
+      boltPattern: spec.boltPattern,
+      centreBoreMm: spec.centreBoreMm,
+      studThread: spec.studThread,
+      loadRatingKg: spec.loadRatingKg,
+    },
+    fits: [],
+  };
+}
+
+interface TyreSpecRow {
+  sku: string;
+  brand: string;
+  range: string;
+  designation: string;
+  treadType: 'highway' | 'all-terrain' | 'mud-terrain';
+  priceCents: number;
+  stockQty: number;
+  leadDays: number;
+  approvedRimWidthIn?: [number, number];
+}
+
+function tyre(spec: TyreSpecRow): DemoProduct {
+  return {
+    sku: spec.sku,
+    kind: 'tyre',
+    name: `${spec.range} ${spec.designation}`,
+    brand: spec.brand,
+    description: `${spec.treadType === 'highway' ? 'Highway' : spec.treadType === 'all-terrain' ? 'All-terrain' : 'Mud-terrain'} tread. Priced each.`,
+    priceCents: spec.priceCents,
+    labourMinutes: 0,
+    bayKind: null,
+    stockQty: spec.stockQty,
+    leadDays: spec.leadDays,
+    attributes: {
+      designation: spec.designation,
+      treadType: spec.treadType,
+      ...(spec.approvedRimWidthIn
+        ? {
+            approvedRimWidthMinIn: spec.approvedRimWidthIn[0],
+            approvedRimWidthMaxIn: spec.approvedRimWidthIn[1],
+          }
+        : {}),
+    },
+    fits: [],
+  };
+}
+
+const SUSPENSION_KITS: DemoProduct[] = [
+  kit({
+    sku: 'BR-STR-40-L',
+    brand: 'Bramblerock',
+    family: 'Strata',
+    liftMm: 40,
+    load: 'light',
+    priceCents: 149500,
+    stockQty: 3,
+    leadDays: 0,
+    fits: ['strata-sr', 'strata-workmate'],
+  }),
+  kit({
+    sku: 'BR-STR-50-L',
+    brand: 'Bramblerock',
+    family: 'Strata',
+    liftMm: 50,
+    load: 'light',
+    priceCents: 169500,
+    stockQty: 2,
+    leadDays: 0,
+    fits: ['strata-sr', 'strata-workmate'],
+  }),
+  kit({
+    sku: 'BR-STR-50-M',
+    brand: 'Bramblerock',
+    family: 'Strata',
+    liftMm: 50,
+    load: 'medium',
+    priceCents: 174500,
+    stockQty: 2,
+    leadDays: 0,
+    fits: ['strata-sr', 'strata-workmate'],
+  }),
+  kit({
+    sku: 'BR-STR-50-H',
+    brand: 'Bramblerock',
+    family: 'Strata',
+    liftMm: 50,
+    load: 'heavy',
+    priceCents: 189500,
+    stockQty: 0,
+    leadDays: 5,
+    fits: ['strata-sr', 'strata-workmate'],
+    includesGreasableShackles: true,
+  }),
+  kit({
+    sku: 'BR-STR-75-M',
+    brand: 'Bramblerock',
+    family: 'Strata',
+    liftMm: 75,
+    load: 'medium',
+    priceCents: 289000,
+    stockQty: 0,
+    leadDays: 10,
+    fits: ['strata-sr', 'strata-workmate'],
+    includesGreasableShackles: true,
+  }),
+  kit({
+    sku: 'TH-BAR-40-L',
+    brand: 'Tarnhill',
+    family: 'Barrow',
+    liftMm: 40,
+    load: 'light',
+    priceCents: 139000,
+    stockQty: 2,
+    leadDays: 0,
+    fits: ['barrow-glx'],
+  }),
+  kit({
+    sku: 'TH-BAR-50-L',
+    brand: 'Tarnhill',
+    family: 'Barrow',
+    liftMm: 50,
+    load: 'light',
+    priceCents: 159000,
+    stockQty: 2,
+    leadDays: 0,
+    fits: ['barrow-glx'],
+  }),
+  kit({
+    sku: 'TH-BAR-50-M',
+    brand: 'Tarnhill',
+    family: 'Barrow',
+    liftMm: 50,
+    load: 'medium',
+    priceCents: 164000,
+    stockQty: 1,
+    leadDays: 0,
+    fits: ['barrow-glx'],
+  }),
+  kit({
+    sku: 'TH-BAR-50-H',
+    brand: 'Tarnhill',
+    family: 'Barrow',
+    liftMm: 50,
+    load: 'heavy',
+    priceCents: 179000,
+    stockQty: 0,
+    leadDays: 7,
+    fits: ['barrow-glx'],
+  }),
+  kit({
+    sku: 'TH-Q76-50-L',
+    brand: 'Tarnhill',
+    family: 'Quarry 76',
+    liftMm: 50,
+    load: 'light',
+    priceCents: 198000,
+    stockQty: 1,
+    leadDays: 0,
+    fits: ['quarry-76'],
+  }),
+  kit({
+    sku: 'TH-Q76-50-M',
+    brand: 'Tarnhill',
+    family: 'Quarry 76',
+    liftMm: 50,
+    load: 'medium',
+    priceCents: 203000,
+    stockQty: 1,
+    leadDays: 0,
+    fits: ['quarry-76'],
+  }),
+  kit({
+    sku: 'TH-Q76-75-M',
+    brand: 'Tarnhill',
+    family: 'Quarry 76',
+    liftMm: 75,
+    load: 'medium',
+    priceCents: 265000,
+    stockQty: 0,
+    leadDays: 10,
+    fits: ['quarry-76'],
+    includesExtendedBrakeLines: true,
+  }),
+  kit({
+    sku: 'BR-Q79-50-M',
+    brand: 'Bramblerock',
+    family: 'Quarry 79',
+    liftMm: 50,
+    load: 'medium',
+    priceCents: 215000,
+    stockQty: 1,
+    leadDays: 0,
+    fits: ['quarry-79'],
+    includesGreasableShackles: true,
+  }),
+  kit({
+    sku: 'BR-Q79-50-H',
+    brand: 'Bramblerock',
+    family: 'Quarry 79',
+    liftMm: 50,
+    load: 'heavy',
+    priceCents: 229000,
+    stockQty: 0,
+    leadDays: 5,
+    fits: ['quarry-79'],
+    includesGreasableShackles: true,
+  }),
+  kit({
+    sku: 'BR-OUT-40-L',
+    brand: 'Bramblerock',
+    family: 'Outrider',
+    liftMm: 40,
+    load: 'light',
+    priceCents: 159000,
+    stockQty: 2,
+    leadDays: 0,
+    fits: ['outrider-gxl'],
+  }),
+  kit({
+    sku: 'BR-OUT-50-M',
+    brand: 'Bramblerock',
+    family: 'Outrider',
+    liftMm: 50,
+    load: 'medium',
+    priceCents: 179000,
+    stockQty: 1,
+    leadDays: 0,
+    fits: ['outrider-gxl'],
+  }),
+  kit({
+    sku: 'TH-HRG-50-L',
+    brand: 'Tarnhill',
+    family: 'Highrange',
+    liftMm: 50,
+    load: 'light',
+    priceCents: 209000,
+    stockQty: 1,
+    leadDays: 0,
+    fits: ['highrange'],
+  }),
+  kit({
+    sku: 'TH-HRG-75-L',
+    brand: 'Tarnhill',
+    family: 'Highrange',
+    liftMm: 75,
+    load: 'light',
+    priceCents: 279000,
+    stockQty: 0,
+    leadDays: 10,
+    fits: ['highrange'],
+    keepsTwoThirdsTravel: false,
+  }),
+];
+
+const WHEELS: DemoProduct[] = [
+  wheel({
+    sku: 'IW-STK-1780-P20',
+    brand: 'Ironwattle',
+    range: 'Stockman',
+    diameterIn: 17,
+    widthIn: 8,
+    offsetMm: 20,
+    boltPattern: '6x139.7',
+    centreBoreMm: 106.1,
+    studThread: 'M12x1.5',
+    loadRatingKg: 1250,
+    priceCents: 38900,
+    stockQty: 16,
+    leadDays: 0,
+  }),
+  wheel({
+    sku: 'IW-STK-1785-00',
+    brand: 'Ironwattle',
+    range: 'Stockman',
+    diameterIn: 17,
+    widthIn: 8.5,
+    offsetMm: 0,
+    boltPattern: '6x139.7',
+    centreBoreMm: 110.1,
+    studThread: 'M12x1.5',
+    loadRatingKg: 1250,
+    priceCents: 41900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  wheel({
+    sku: 'IW-STK-1680-N12',
+    brand: 'Ironwattle',
+    range: 'Stockman',
+    diameterIn: 16,
+    widthIn: 8,
+    offsetMm: -12,
+    boltPattern: '6x139.7',
+    centreBoreMm: 110.1,
+    studThread: 'M12x1.5',
+    loadRatingKg: 1150,
+    priceCents: 36900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  wheel({
+    sku: 'SL-GIB-1890-P12',
+    brand: 'Scrubline',
+    range: 'Gibber',
+    diameterIn: 18,
+    widthIn: 9,
+    offsetMm: 12,
+    boltPattern: '6x139.7',
+    centreBoreMm: 106.1,
+    studThread: 'M12x1.5',
+    loadRatingKg: 1200,
+    priceCents: 44900,
+    stockQty: 0,
+    leadDays: 6,
+  }),
+  wheel({
+    sku: 'SL-GIB-1780-P35',
+    brand: 'Scrubline',
+    range: 'Gibber',
+    diameterIn: 17,
+    widthIn: 8,
+    offsetMm: 35,
+    boltPattern: '6x114.3',
+    centreBoreMm: 93.1,
+    studThread: 'M12x1.5',
+    loadRatingKg: 1100,
+    priceCents: 39900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  wheel({
+    sku: 'SL-GIB-1885-P25',
+    brand: 'Scrubline',
+    range: 'Gibber',
+    diameterIn: 18,
+    widthIn: 8.5,
+    offsetMm: 25,
+    boltPattern: '6x114.3',
+    centreBoreMm: 93.1,
+    studThread: 'M12x1.5',
+    loadRatingKg: 1150,
+    priceCents: 42900,
+    stockQty: 4,
+    leadDays: 0,
+  }),
+  wheel({
+    sku: 'IW-CLP-1680-N12',
+    brand: 'Ironwattle',
+    range: 'Claypan',
+    diameterIn: 16,
+    widthIn: 8,
+    offsetMm: -12,
+    boltPattern: '5x150',
+    centreBoreMm: 110.1,
+    studThread: 'M14x1.5',
+    loadRatingKg: 1250,
+    priceCents: 37900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  wheel({
+    sku: 'IW-CLP-1780-P20',
+    brand: 'Ironwattle',
+    range: 'Claypan',
+    diameterIn: 17,
+    widthIn: 8,
+    offsetMm: 20,
+    boltPattern: '5x150',
+    centreBoreMm: 110.1,
+    studThread: 'M14x1.5',
+    loadRatingKg: 1250,
+    priceCents: 39900,
+    stockQty: 4,
+    leadDays: 0,
+  }),
+  wheel({
+    sku: 'SL-DUN-1790-N12',
+    brand: 'Scrubline',
+    range: 'Dune',
+    diameterIn: 17,
+    widthIn: 9,
+    offsetMm: -12,
+    boltPattern: '5x150',
+    centreBoreMm: 110.1,
+    studThread: 'M14x1.5',
+    loadRatingKg: 1250,
+    priceCents: 45900,
+    stockQty: 0,
+    leadDays: 6,
+  }),
+  wheel({
+    sku: 'SL-TWN-1770-P35',
+    brand: 'Scrubline',
+    range: 'Townie',
+    diameterIn: 17,
+    widthIn: 7,
+    offsetMm: 35,
+    boltPattern: '6x139.7',
+    centreBoreMm: 106.1,
+    studThread: 'M12x1.5',
+    loadRatingKg: 900,
+    priceCents: 28900,
+    stockQty: 12,
+    leadDays: 0,
+  }),
+];
+
+const TYRES: DemoProduct[] = [
+  tyre({
+    sku: 'QD-HT-2656517',
+    brand: 'Quendra',
+    range: 'Highway Tour',
+    designation: '265/65R17 112S',
+    treadType: 'highway',
+    priceCents: 28900,
+    stockQty: 12,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'QD-HT-2657016',
+    brand: 'Quendra',
+    range: 'Highway Tour',
+    designation: '265/70R16 112S',
+    treadType: 'highway',
+    priceCents: 26900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'QD-MH-P2657017',
+    brand: 'Quendra',
+    range: 'Metro H/T',
+    designation: 'P265/70R17 113T',
+    treadType: 'highway',
+    priceCents: 25900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'QD-TG-2657017',
+    brand: 'Quendra',
+    range: 'Trailgrip A/T',
+    designation: '265/70R17 115T',
+    treadType: 'all-terrain',
+    priceCents: 32900,
+    stockQty: 16,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'QD-TG-LT2657017',
+    brand: 'Quendra',
+    range: 'Trailgrip A/T',
+    designation: 'LT265/70R17 121/118S',
+    treadType: 'all-terrain',
+    priceCents: 36900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'QD-TG-LT2857017',
+    brand: 'Quendra',
+    range: 'Trailgrip A/T',
+    designation: 'LT285/70R17 121/118Q',
+    treadType: 'all-terrain',
+    priceCents: 39900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'QD-TG-LT2657516',
+    brand: 'Quendra',
+    range: 'Trailgrip A/T',
+    designation: 'LT265/75R16 123/120R',
+    treadType: 'all-terrain',
+    priceCents: 34900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'SP-MH-LT2857517',
+    brand: 'Saltpan',
+    range: 'Mudhook M/T',
+    designation: 'LT285/75R17 121/118Q',
+    treadType: 'mud-terrain',
+    priceCents: 45900,
+    stockQty: 4,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'SP-MH-331250R17',
+    brand: 'Saltpan',
+    range: 'Mudhook M/T',
+    designation: '33x12.50R17LT 114Q',
+    treadType: 'mud-terrain',
+    priceCents: 48900,
+    stockQty: 4,
+    leadDays: 0,
+    approvedRimWidthIn: [8.5, 11],
+  }),
+  tyre({
+    sku: 'SP-MH-351250R17',
+    brand: 'Saltpan',
+    range: 'Mudhook M/T',
+    designation: '35x12.50R17LT 121Q',
+    treadType: 'mud-terrain',
+    priceCents: 52900,
+    stockQty: 0,
+    leadDays: 7,
+  }),
+  tyre({
+    sku: 'SP-MH-LT2857516',
+    brand: 'Saltpan',
+    range: 'Mudhook M/T',
+    designation: 'LT285/75R16 126/123Q',
+    treadType: 'mud-terrain',
+    priceCents: 44900,
+    stockQty: 4,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'SP-BM-351250R17',
+    brand: 'Saltpan',
+    range: 'Bogmaster M/T (off-road competition)',
+    designation: '35x12.50R17LT 121M',
+    treadType: 'mud-terrain',
+    priceCents: 56900,
+    stockQty: 0,
+    leadDays: 14,
+  }),
+  tyre({
+    sku: 'SP-GR-2856517',
+    brand: 'Saltpan',
+    range: 'Gravelrun A/T',
+    designation: '285/65R17 116T',
+    treadType: 'all-terrain',
+    priceCents: 38900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'SP-GR-2656018',
+    brand: 'Saltpan',
+    range: 'Gravelrun A/T',
+    designation: '265/60R18 110T',
+    treadType: 'all-terrain',
+    priceCents: 35900,
+    stockQty: 8,
+    leadDays: 0,
+  }),
+  tyre({
+    sku: 'SP-GR-LT2757018',
+    brand: 'Saltpan',
+    range: 'Gravelrun A/T',
+    designation: 'LT275/70R18 125/122S',
+    treadType: 'all-terrain',
+    priceCents: 41900,
+    stockQty: 4,
+    leadDays: 0,
+  }),
+];
+
+const COMPONENTS: DemoProduct[] = [
+  {
+    sku: 'DW-DD-25',
+    kind: 'component',
+    name: 'Diff drop kit, 25 mm',
+    brand: 'Diffwell',
+    description:
+      'Spacers and longer bolts that lower the front differential 25 mm, bringing the drive-shaft joint angles back after a lift.',
+    priceCents: 18900,
+    labourMinutes: 90,
+    bayKind: 'hoist',
+    stockQty: 4,
+    leadDays: 0,
+    attributes: { role: 'diff-drop', diffDropMm: 25, massKg: 2 },
+    fits: IFS,
+  },
+  {
+    sku: 'BR-GPS-LEAF',
+    kind: 'component',
+    name: 'Greasable pin and shackle kit',
+    brand: 'Bramblerock',
+    description: 'Greasable spring pins and shackles for raised leaf springs.',
+    priceCents: 24900,
+    labourMinutes: 120,
+    bayKind: 'hoist',
+    stockQty: 3,
+    leadDays: 0,
+    attributes: { role: 'greasable-shackles', massKg: 4 },
+    fits: LEAF_REAR,
+  },
+  {
+    sku: 'BR-EBL-50',
+    kind: 'component',
+    name: 'Extended brake lines (+50 mm)',
+    brand: 'Bramblerock',
+    description: 'Braided brake hoses that keep slack at full droop after a lift past 50 mm.',
+    priceCents: 21900,
+    labourMinutes: 90,
+    bayKind: 'hoist',
+    stockQty: 2,
+    leadDays: 0,
+    attributes: { role: 'extended-brake-lines', massKg: 1 },
+    fits: [],
+  },
+  {
+    sku: 'TH-SD-SOLID',
+    kind: 'component',
+    name: 'Steering damper, solid front axle',
+    brand: 'Tarnhill',
+    description: 'Calms kick-back through the steering with larger tyres on a solid front axle.',
+    priceCents: 17900,
+    labourMinutes: 45,
+    bayKind: 'hoist',
+    stockQty: 2,
+    leadDays: 0,
+    attributes: { role: 'steering-damper', massKg: 3 },
+    fits: SOLID_FRONT,
+  },
+  {
+    sku: 'IW-HR-1101-1061',
+    kind: 'component',
+    name: 'Hub-centric rings 110.1 to 106.1 mm, set of four',
+    brand: 'Ironwattle',
+    description: 'Centre a 110.1 mm bore wheel on a 106.1 mm hub.',
+    priceCents: 3900,
+    labourMinutes: 0,
+    bayKind: null,
+    stockQty: 20,
+    leadDays: 0,
+    attributes: { role: 'hub-rings' },
+    fits: [],
+  },
+  {
+    sku: 'TH-BB-STR',
+    kind: 'component',
+    name: 'Steel bull bar, Strata',
+    brand: 'Tarnhill',
+    description: 'Winch-compatible steel bull bar. Adds 68 kg at the front.',
+    priceCents: 215000,
+    labourMinutes: 240,
+    bayKind: 'hoist',
+    stockQty: 0,
+    leadDays: 14,
+    attributes: { role: 'accessory', massKg: 68 },
+    fits: ['strata-sr', 'strata-workmate'],
+  },
+];
+
+const WORKSHOP = 'Kestrelmere Workshop';
+
+const SERVICES: DemoProduct[] = [
+  {
+    sku: 'KW-SVC-ALIGN',
+    kind: 'service',
+    name: 'Wheel alignment (camber, caster and toe)',
+    brand: WORKSHOP,
+    description:
+      "Measured and set to the vehicle maker's specification, with a before and after print-out.",
+    priceCents: 14900,
+    labourMinutes: 60,
+    bayKind: 'alignment',
+    stockQty: 0,
+    leadDays: 0,
+    attributes: { role: 'alignment', perWheel: false },
+    fits: [],
+  },
+  {
+    sku: 'KW-SVC-FITBAL',
+    kind: 'service',
+    name: 'Tyre fitting and balancing, per wheel',
+    brand: WORKSHOP,
+    description: 'Mount, balance and fit one wheel and tyre, with a new valve.',
+    priceCents: 3500,
+    labourMinutes: 15,
+    bayKind: 'tyre',
+    stockQty: 0,
+    leadDays: 0,
+    attributes: { role: 'fitting-balancing', perWheel: true },
+    fits: [],
+  },
+  {
+    sku: 'KW-SVC-DISPOSAL',
+    kind: 'service',
+    name: 'Tyre disposal, per tyre',
+    brand: WORKSHOP,
+    description: 'Recycling levy for each old tyre the workshop takes back.',
+    priceCents: 650,
+    labourMinutes: 0,
+    bayKind: null,
+    stockQty: 0,
+    leadDays: 0,
+    attributes: { role: 'tyre-disposal', perWheel: true },
+    fits: [],
+  },
+  {
+    sku: 'KW-SVC-HEADLIGHT',
+    kind: 'service',
+    name: 'Headlight re-aim',
+    brand: WORKSHOP,
+    description: 'Headlights re-aimed after a ride-height change.',
+    priceCents: 4900,
+    labourMinutes: 20,
+    bayKind: 'alignment',
+    stockQty: 0,
+    leadDays: 0,
+    attributes: { role: 'headlight-re-aim', perWheel: false },
+    fits: [],
+  },
+  {
+    sku: 'KW-SVC-SPEEDO',
+    kind: 'service',
+    name: 'Speedometer recalibration',
+    brand: WORKSHOP,
+    description: 'Recalibrated for the new tyre size, checked against a measured run.',
+    priceCents: 28900,
+    labourMinutes: 45,
+    bayKind: 'hoist',
+    stockQty: 0,
+    leadDays: 0,
+    attributes: { role: 'speedometer-recalibration', perWheel: false },
+    fits: [],
+  },
+];
+
+export const DEMO_PRODUCTS: readonly DemoProduct[] = [
+  ...SUSPENSION_KITS,
+  ...WHEELS,
+  ...TYRES,
+  ...COMPONENTS,
+  ...SERVICES,
+];

@@ -1,0 +1,33 @@
+import type { RuleKey } from '../fitment/rule-set-limits';
+
+/** What a rule editor shows beside each rule. */
+export const RULE_KEY_LABELS: Readonly<Record<RuleKey, string>> = {
+  boltPatternMatch: 'Bolt pattern must match the hub',
+  centreBoreFit: 'Centre bore must clear the hub (hub rings when larger)',
+  studThreadMatch: 'Wheel nut thread must match the studs',
+  wheelLoadRating: 'Wheel load rating covers half the heaviest axle',
+  tyreLoadCapacity: 'Tyre load capacity (load index) covers the axle and the placard',
+  passengerTyreLightTruckDerateFactor: 'Derate for passenger (P) tyres on a light truck',
+  placardSpeedSymbolEnforced: 'Tyres must meet the placard speed symbol',
+  minSpeedKmhOther: 'Lowest tyre speed rating, other vehicles',
+  minSpeedKmhOffRoad: 'Lowest tyre speed rating, off-road vehicles',
+  speedSymbolOffRoadExemption: 'Off-road vehicles may run tyres rated below the placard',
+  rimDiameterMatch: 'Wheel diameter must match the tyre',
+  rimWidthForSection: 'Rim width within the range for the tyre section',
+  tyreDiameterIncreaseMaxMm: 'Largest tyre diameter increase, off-road vehicles',
+  tyreDiameterIncreaseMaxMmOther: 'Largest tyre diameter increase, other vehicles',
+  tyreDiameterDecreaseMaxMm: 'Largest tyre diameter decrease',
+  diameterChangeMaxPercent: 'Largest tyre diameter change either way',
+  speedometerAccuracy: 'Speedometer never reads below true speed',
+  clearanceAllowanceMmPer25mmLift: 'Extra tyre diameter that clears the body per 25 mm of lift',
+  suspensionLiftMaxMm: 'Largest suspension raise or lowering without certification',
+  combinedLiftMaxMm: 'Largest combined lift (suspension + half the tyre increase)',
+  jointAngleThresholdDeg: 'Added drive-shaft angle past which a diff drop is suggested',
+  alignmentAfterChange: 'Wheel alignment after any suspension or tyre-size change',
+  springRatingForLoad: 'Springs rated for the declared constant load',
+  brakeLineLiftThresholdMm: 'Lift past which extended brake lines are suggested',
+  trackIncreaseMaxMm: 'Largest wheel track increase',
+  wheelSpacersProhibited: 'Wheel spacers not permitted',
+  grossVehicleMass: 'Loaded mass within the GVM',
+  occupantAllowanceKg: 'Mass counted per occupant',
+};
