@@ -31,9 +31,9 @@ describe('a new customer registers', () => {
       await page.getByRole('button', { name: 'Create account' }).click();
 
       await page.waitForURL('**/account');
-      expect(await page.getByRole('heading', { level: 1, name: 'Your garage' }).isVisible()).toBe(
-        true,
-      );
+      await expect
+        .poll(() => page.getByRole('heading', { level: 1, name: 'Your garage' }).isVisible())
+        .toBe(true);
       await screenshot(page, 'customer-registers', 'customer-home');
 
       // The session is real: the API knows who this is.

@@ -53,9 +53,11 @@ describe('the manager keeps staff accounts', () => {
       const newcomer = await newPage(browser, viewport);
       await signIn(newcomer.page, email, 'spanner-passphrase-1');
       await newcomer.page.waitForURL('**/desk');
-      expect(
-        await newcomer.page.getByRole('heading', { level: 1, name: 'Front desk' }).isVisible(),
-      ).toBe(true);
+      await expect
+        .poll(() =>
+          newcomer.page.getByRole('heading', { level: 1, name: 'Front desk' }).isVisible(),
+        )
+        .toBe(true);
       await newcomer.context.close();
     });
   }

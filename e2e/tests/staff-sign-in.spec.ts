@@ -40,9 +40,9 @@ describe('each role signs in and sees its own navigation', () => {
         const account = demoUsers[role as keyof typeof demoUsers];
         await signIn(page, account.email, account.password);
         await page.waitForURL(`**${expected.home}`);
-        expect(
-          await page.getByRole('heading', { level: 1, name: expected.heading }).isVisible(),
-        ).toBe(true);
+        await expect
+          .poll(() => page.getByRole('heading', { level: 1, name: expected.heading }).isVisible())
+          .toBe(true);
 
         const targets = await navigationTargets(page);
         expect(targets.length).toBeGreaterThan(0);
