@@ -22,7 +22,7 @@ describe('the manager keeps staff accounts', () => {
   for (const viewport of ['desktop', 'phone'] as ViewportName[]) {
     it(`adds a technician, changes them to front desk, and they sign in to the desk (${viewport})`, async () => {
       const email = `new.hand.${viewport}.${Date.now()}@liftwright.example`;
-      const name = `Sam Spanner ${viewport}`;
+      const name = `Sam Spanner ${viewport} ${Date.now() % 100000}`;
       const manager = await newPage(browser, viewport);
       await signIn(manager.page, demoUsers.manager.email, demoUsers.manager.password);
       await manager.page.waitForURL('**/manage');

@@ -108,6 +108,15 @@ export function createAppRouter(queryClient: QueryClient) {
           children: areaPages([
             { index: true, lazy: lazy(() => import('./routes/manage/home')) },
             { path: paths.manage.staff.path, lazy: lazy(() => import('./routes/manage/staff')) },
+            {
+              path: paths.manage.catalogue.path,
+              lazy: lazy(() => import('./routes/manage/catalogue')),
+            },
+            {
+              path: paths.manage.vehicles.path,
+              lazy: lazy(() => import('./routes/manage/vehicles')),
+            },
+            { path: paths.manage.rules.path, lazy: lazy(() => import('./routes/manage/rules')) },
             notFound(),
           ]),
         },

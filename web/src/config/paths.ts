@@ -37,6 +37,13 @@ export const paths = {
   manage: {
     home: { path: '/manage', getHref: () => '/manage' },
     staff: { path: '/manage/staff', getHref: () => '/manage/staff' },
+    catalogue: { path: '/manage/catalogue', getHref: () => '/manage/catalogue' },
+    vehicles: { path: '/manage/vehicles', getHref: () => '/manage/vehicles' },
+    rules: {
+      path: '/manage/rules',
+      /** With a rule set's id, that set is the one open for editing. */
+      getHref: (ruleSetId?: string | null) => withQuery('/manage/rules', { set: ruleSetId }),
+    },
   },
 } as const;
 

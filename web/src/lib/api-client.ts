@@ -132,16 +132,27 @@ async function toApiError(response: Response): Promise<ApiError> {
   });
 }
 
-async function send(method: string, path: string, body: unknown, token: string | null) {
-  const headers: Record<string, string> = { accept: 'application/json' };
-  if (body !== undefined) headers['content-type'] = 'application/json';
+/** What a request expects back: JSON (the default), or the raw bytes of a download. */
+type ResponseKind = 'json' | 'blob';
+
+async function send(
+  method: string,
+  path: string,
+  body: unknown,
+  token: string | null,
+  accept: string,
+) {
+  const headers: Record<string, string> = { accept };
+  // A FormData body (a file upload) sets its own multipart content type and boundary.
+  const isForm = body instanceof FormData;
+  if (body !== undefined && !isForm) headers['content-type'] = 'application/json';
   if (token) headers[CSRF_HEADER] = token;
   try {
     return await fetch(path, {
       method,
       headers,
       credentials: 'same-origin',
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: body === undefined ? undefined : isForm ? body : JSON.stringify(body),
     });
   } catch {
     throw new ApiError({
@@ -152,15 +163,21 @@ async function send(method: string, path: string, body: unknown, token: string |
   }
 }
 
-async function request<T>(method: string, path: string, body?: unknown): Promise<T> {
+async function request<T>(
+  method: string,
+  path: string,
+  body?: unknown,
+  kind: ResponseKind = 'json',
+): Promise<T> {
   const mutating = MUTATING_METHODS.has(method);
-  let response = await send(method, path, body, mutating ? await currentCsrfToken() : null);
+  const accept = kind === 'blob' ? '*/*' : 'application/json';
+  let response = await send(method, path, body, mutating ? await currentCsrfToken() : null, accept);
 
   let error = response.ok ? null : await toApiError(response);
   if (error && mutating && isCsrfRejection(error)) {
     // The session (and with it the token) may have been renewed: ask once more, then retry once.
     setCsrfToken(null);
-    response = await send(method, path, body, await fetchCsrfToken());
+    response = await send(method, path, body, await fetchCsrfToken(), accept);
     error = response.ok ? null : await toApiError(response);
   }
 
@@ -172,6 +189,7 @@ async function request<T>(method: string, path: string, body?: unknown): Promise
   }
 
   if (response.status === 204 || response.status === 205) return undefined as T;
+  if (kind === 'blob') return (await response.blob()) as T;
   const text = await response.text();
   return (text ? JSON.parse(text) : undefined) as T;
 }
@@ -183,4 +201,8 @@ export const api = {
   put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
   delete: <T = void>(path: string) => request<T>('DELETE', path),
+  /** A multipart/form-data POST (a file upload), with the CSRF token like any other. */
+  postForm: <T>(path: string, form: FormData) => request<T>('POST', path, form),
+  /** A GET whose answer is a file to save (a CSV export); errors still come back as ApiError. */
+  getBlob: (path: string) => request<Blob>('GET', path, undefined, 'blob'),
 };

@@ -1,3 +1,4 @@
+import { getIn } from 'formik';
 import { isApiError } from './api-client';
 
 /** A field error from the server, with the value it was about. */
@@ -25,11 +26,22 @@ export interface FormErrorResult {
 const FALLBACK_MESSAGE = 'Something went wrong. Please try again.';
 
 /**
+ * Where a server field error lands: a form field's name (a dotted path such as
+ * "attributes.offsetMm" for nested values), or null to leave it for the general message.
+ * Used when the form holds a value under another name than the API (dollars for priceCents).
+ */
+export type FieldNameMap = (property: string) => string | null | undefined;
+
+/**
  * Splits an error from the API between the form's own fields and a general message. Field
  * errors for properties the form does not show (e.g. a reset token) join the general message so
- * they are never lost.
+ * they are never lost; their text then names the property, so the message still says which.
  */
-export function toFormErrors(error: unknown, fields: readonly string[]): FormErrorResult {
+export function toFormErrors(
+  error: unknown,
+  fields: readonly string[],
+  mapField?: FieldNameMap,
+): FormErrorResult {
   if (!isApiError(error)) return { fieldErrors: {}, generalMessage: FALLBACK_MESSAGE };
 
   const known = new Set(fields);
@@ -37,8 +49,10 @@ export function toFormErrors(error: unknown, fields: readonly string[]): FormErr
   const unplaced: string[] = [];
   for (const [property, messages] of Object.entries(error.fieldErrors)) {
     const text = messages.join(' ');
-    if (known.has(property)) fieldErrors[property] = text;
-    else unplaced.push(text);
+    const field = mapField?.(property) ?? property;
+    if (known.has(field))
+      fieldErrors[field] = fieldErrors[field] ? `${fieldErrors[field]} ${text}` : text;
+    else unplaced.push(mapField ? `${property} ${text}` : text);
   }
 
   let generalMessage: string | null;
@@ -48,18 +62,21 @@ export function toFormErrors(error: unknown, fields: readonly string[]): FormErr
   return { fieldErrors, generalMessage };
 }
 
-/** Puts an API error onto a Formik form: field errors on the fields, the rest in its Alert. */
+/**
+ * Puts an API error onto a Formik form: field errors on the fields, the rest in its Alert.
+ * `fields` are the form's field names; nested ones as dotted paths ("stockWheel.offsetMm").
+ */
 export function applyApiErrorToForm<Values extends object>(
   error: unknown,
   helpers: { setStatus: (status: FormStatus) => void },
   values: Values,
-  fields: readonly (keyof Values & string)[],
+  fields: readonly (keyof Values & string)[] | readonly string[],
+  mapField?: FieldNameMap,
 ): void {
-  const { fieldErrors, generalMessage } = toFormErrors(error, fields);
-  const submitted = values as Record<string, unknown>;
+  const { fieldErrors, generalMessage } = toFormErrors(error, fields, mapField);
   const placed: Record<string, ServerFieldError> = {};
   for (const [field, message] of Object.entries(fieldErrors)) {
-    placed[field] = { message, value: submitted[field] };
+    placed[field] = { message, value: getIn(values, field) as unknown };
   }
   helpers.setStatus({ generalError: generalMessage, fieldErrors: placed });
 }

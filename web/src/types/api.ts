@@ -95,3 +95,263 @@ export interface UpdateStaffRequest {
   role?: StaffRole;
   active?: boolean;
 }
+
+// ---- Vehicle models (GET public; POST/PATCH manager) ---------------------------------------
+
+export type BodyType = 'ute' | 'wagon';
+export type FrontSuspensionKind = 'independent' | 'solid-axle';
+export type RearSuspensionKind = 'leaf' | 'coil' | 'independent';
+
+export interface StockWheel {
+  diameterIn: number;
+  widthIn: number;
+  offsetMm: number;
+}
+
+/** A vehicle model's spec sheet: what the fit report checks a package against. */
+export interface VehicleModel {
+  id: string;
+  make: string;
+  model: string;
+  variant: string;
+  yearFrom: number;
+  yearTo: number;
+  bodyType: BodyType;
+  frontSuspension: FrontSuspensionKind;
+  rearSuspension: RearSuspensionKind;
+  /** Stud count x pitch circle diameter in mm, e.g. "6x139.7". */
+  boltPattern: string;
+  /** Metric wheel-nut thread, e.g. "M12x1.5". */
+  studThread: string;
+  centreBoreMm: number;
+  /** Tyre designation with service description, e.g. "265/65R17 112S". */
+  stockTyre: string;
+  largestSpecifiedTyre: string | null;
+  stockWheel: StockWheel;
+  gvmKg: number;
+  frontAxleKg: number;
+  rearAxleKg: number;
+  kerbMassKg: number;
+  placardLoadIndex: number;
+  placardSpeedSymbol: string;
+  frontHalfShaftLengthMm: number | null;
+  offRoadCategory: boolean;
+  topSpeedKmh: number | null;
+}
+
+export type VehicleModelSpec = Omit<VehicleModel, 'id'>;
+
+export interface VehicleModelListResponse {
+  items: VehicleModel[];
+}
+
+export interface VehicleModelQuery {
+  q?: string;
+  make?: string;
+  year?: number;
+}
+
+export type CreateVehicleModelRequest = VehicleModelSpec;
+export type UpdateVehicleModelRequest = Partial<VehicleModelSpec>;
+
+// ---- Products (GET public, includeInactive for managers; POST/PATCH manager) --------------
+
+export type ProductKind = 'wheel' | 'tyre' | 'suspension-kit' | 'component' | 'service';
+export type BayKind = 'hoist' | 'alignment' | 'tyre';
+export type TreadType = 'highway' | 'all-terrain' | 'mud-terrain';
+export type ComponentRole =
+  | 'diff-drop'
+  | 'greasable-shackles'
+  | 'extended-brake-lines'
+  | 'steering-damper'
+  | 'hub-rings'
+  | 'accessory';
+export type ServiceRole =
+  | 'alignment'
+  | 'fitting-balancing'
+  | 'tyre-disposal'
+  | 'headlight-re-aim'
+  | 'speedometer-recalibration';
+
+export interface WheelAttributes {
+  diameterIn: number;
+  widthIn: number;
+  offsetMm: number;
+  boltPattern: string;
+  centreBoreMm: number;
+  studThread: string;
+  loadRatingKg: number;
+}
+
+export interface TyreAttributes {
+  designation: string;
+  treadType: TreadType;
+  approvedRimWidthMinIn?: number;
+  approvedRimWidthMaxIn?: number;
+}
+
+export interface SuspensionKitAttributes {
+  frontLiftMm: number;
+  rearLiftMm: number;
+  constantLoadMinKg: number;
+  constantLoadMaxKg: number;
+  keepsTwoThirdsTravel: boolean;
+  includesGreasableShackles: boolean;
+  includesExtendedBrakeLines: boolean;
+}
+
+export interface ComponentAttributes {
+  role: ComponentRole;
+  diffDropMm?: number;
+  massKg?: number;
+}
+
+export interface ServiceAttributes {
+  role: ServiceRole;
+  perWheel: boolean;
+}
+
+export interface ProductAttributesByKind {
+  wheel: WheelAttributes;
+  tyre: TyreAttributes;
+  'suspension-kit': SuspensionKitAttributes;
+  component: ComponentAttributes;
+  service: ServiceAttributes;
+}
+
+export type ProductAttributes = ProductAttributesByKind[ProductKind];
+
+export interface Product {
+  id: string;
+  sku: string;
+  kind: ProductKind;
+  name: string;
+  brand: string;
+  description: string;
+  /** Price including tax, integer cents. */
+  priceCents: number;
+  labourMinutes: number;
+  /** The bay its labour is done in; null for no bay time. */
+  bayKind: BayKind | null;
+  stockQty: number;
+  /** Days to get it in when out of stock. */
+  leadDays: number;
+  active: boolean;
+  /** Vehicle models it is made for; empty: any vehicle. */
+  fitsVehicleModelIds: string[];
+  attributes: ProductAttributes;
+}
+
+export type FitVerdict = 'does-not-fit' | 'needs-certification' | 'advisory' | 'ok';
+
+/** A list item; `fit` only when the list was asked for with a vehicleModelId. */
+export interface ProductWithFit extends Product {
+  fit?: { verdict: FitVerdict; summary: string };
+}
+
+export interface ProductListResponse {
+  items: ProductWithFit[];
+}
+
+export interface ProductQuery {
+  vehicleModelId?: string;
+  kind?: ProductKind;
+  q?: string;
+  /** Managers only. */
+  includeInactive?: boolean;
+}
+
+export interface CreateProductRequest {
+  sku: string;
+  kind: ProductKind;
+  name: string;
+  brand: string;
+  description?: string;
+  priceCents: number;
+  labourMinutes?: number;
+  bayKind?: BayKind | null;
+  stockQty?: number;
+  leadDays?: number;
+  active?: boolean;
+  fitsVehicleModelIds?: string[];
+  attributes: ProductAttributes;
+}
+
+export type UpdateProductRequest = Partial<CreateProductRequest>;
+
+// ---- Catalogue CSV (manager) ---------------------------------------------------------------
+
+export type ImportRowStatus = 'new' | 'updated' | 'unchanged' | 'rejected';
+
+export interface ImportSummary {
+  new: number;
+  updated: number;
+  unchanged: number;
+  rejected: number;
+}
+
+export interface ImportFieldChange {
+  /** Stored value (product field, e.g. priceCents in cents). */
+  from: unknown;
+  /** Value from the file. */
+  to: unknown;
+}
+
+export interface ImportRow {
+  /** Line of the file (the header is line 1). */
+  line: number;
+  /** As written in the file. */
+  sku: string;
+  status: ImportRowStatus;
+  /** Rejected rows: why. */
+  reason?: string;
+  /** Updated rows: each changed product field (API field names). */
+  changes?: Record<string, ImportFieldChange>;
+}
+
+export interface ImportPreviewResponse {
+  summary: ImportSummary;
+  rows: ImportRow[];
+}
+
+/** What apply wrote. The contract promises the summary; the rows may come too. */
+export interface ImportApplyResponse {
+  summary: ImportSummary;
+  rows?: ImportRow[];
+}
+
+// ---- Rule sets (GET manager, desk; PATCH manager) ------------------------------------------
+
+export interface RuleLimit {
+  /** false: the rule is switched off and its check does not run. */
+  enabled: boolean;
+  /** null for a switch (a rule without a number). */
+  value: number | null;
+  unit: string | null;
+  /** The rule's published source, quoted in the fit report. */
+  source: string;
+  label: string;
+}
+
+export interface RuleSet {
+  id: string;
+  name: string;
+  jurisdiction: string;
+  description: string;
+  isDefault: boolean;
+  /** Every rule key, in report order. */
+  limits: Record<string, RuleLimit>;
+}
+
+export interface RuleSetListResponse {
+  items: RuleSet[];
+}
+
+export interface RuleLimitChange {
+  enabled?: boolean;
+  value?: number;
+}
+
+export interface UpdateRuleSetRequest {
+  limits: Record<string, RuleLimitChange>;
+}

@@ -3,15 +3,18 @@ import BottomNavigation from '@mui/material/BottomNavigation';
 import BottomNavigationAction from '@mui/material/BottomNavigationAction';
 import Box from '@mui/material/Box';
 import Container from '@mui/material/Container';
+import MoreHoriz from '@mui/icons-material/MoreHoriz';
 import List from '@mui/material/List';
 import ListItemButton from '@mui/material/ListItemButton';
 import ListItemIcon from '@mui/material/ListItemIcon';
 import ListItemText from '@mui/material/ListItemText';
+import Menu from '@mui/material/Menu';
+import MenuItem from '@mui/material/MenuItem';
 import Paper from '@mui/material/Paper';
 import Toolbar from '@mui/material/Toolbar';
 import useMediaQuery from '@mui/material/useMediaQuery';
 import { useTheme, type Breakpoint } from '@mui/material/styles';
-import type { ReactNode } from 'react';
+import { useId, useState, type ReactNode } from 'react';
 import { matchPath, NavLink, useLocation } from 'react-router';
 import { Brand } from './brand';
 import { NavigationProgress } from './navigation-progress';
@@ -20,6 +23,9 @@ import { MAIN_CONTENT_ID, SkipLink } from './skip-link';
 import { useFocusMainOnNavigate } from './use-focus-main-on-navigate';
 
 const SIDE_NAV_WIDTH = 232;
+/** A phone's bottom bar holds at most this many destinations; more go behind "More". */
+const BOTTOM_NAV_MAX_ITEMS = 5;
+const MORE_VALUE = '#more';
 const BOTTOM_NAV_HEIGHT = 64;
 /** The desktop toolbar (64px) and the ochre rule under it (3px). */
 const APP_BAR_HEIGHT = 67;
@@ -83,6 +89,17 @@ function SideNav({ items }: { items: readonly NavItem[] }) {
 
 function BottomNav({ items }: { items: readonly NavItem[] }) {
   const { pathname } = useLocation();
+  const menuId = useId();
+  const moreId = useId();
+  const [menuAnchor, setMenuAnchor] = useState<HTMLElement | null>(null);
+  // Five destinations fit a phone's width with their labels; past that the last ones share a
+  // "More" menu (the side bar on wide screens always lists them all).
+  const overflowing = items.length > BOTTOM_NAV_MAX_ITEMS;
+  const shown = overflowing ? items.slice(0, BOTTOM_NAV_MAX_ITEMS - 1) : items;
+  const more = overflowing ? items.slice(BOTTOM_NAV_MAX_ITEMS - 1) : [];
+  const active = activeItem(items, pathname);
+  const value = more.some((item) => item.to === active) ? MORE_VALUE : active;
+
   return (
     <Paper
       component="nav"
@@ -101,10 +118,16 @@ function BottomNav({ items }: { items: readonly NavItem[] }) {
     >
       <BottomNavigation
         showLabels
-        value={activeItem(items, pathname)}
-        sx={{ height: BOTTOM_NAV_HEIGHT }}
+        value={value}
+        // Five labelled destinations share a 360px-wide phone: tighter side padding keeps
+        // "Front desk" on one line.
+        sx={{
+          height: BOTTOM_NAV_HEIGHT,
+          '& .MuiBottomNavigationAction-root': { minWidth: 0, px: 0.5 },
+          '& .MuiBottomNavigationAction-label': { whiteSpace: 'nowrap' },
+        }}
       >
-        {items.map((item) => (
+        {shown.map((item) => (
           <BottomNavigationAction
             key={item.to}
             component={NavLink}
@@ -115,7 +138,42 @@ function BottomNav({ items }: { items: readonly NavItem[] }) {
             icon={item.icon}
           />
         ))}
+        {overflowing && (
+          <BottomNavigationAction
+            id={moreId}
+            value={MORE_VALUE}
+            label="More"
+            icon={<MoreHoriz />}
+            aria-haspopup="menu"
+            aria-controls={menuAnchor ? menuId : undefined}
+            aria-expanded={menuAnchor ? true : undefined}
+            onClick={(event) => setMenuAnchor(event.currentTarget)}
+          />
+        )}
       </BottomNavigation>
+      <Menu
+        anchorEl={menuAnchor}
+        open={menuAnchor !== null}
+        onClose={() => setMenuAnchor(null)}
+        anchorOrigin={{ vertical: 'top', horizontal: 'right' }}
+        transformOrigin={{ vertical: 'bottom', horizontal: 'right' }}
+        slotProps={{ list: { id: menuId, 'aria-labelledby': moreId } }}
+      >
+        {more.map((item) => (
+          <MenuItem
+            key={item.to}
+            component={NavLink}
+            to={item.to}
+            end={item.end}
+            selected={item.to === active}
+            onClick={() => setMenuAnchor(null)}
+            sx={{ minHeight: 48, minWidth: 180 }}
+          >
+            <ListItemIcon>{item.icon}</ListItemIcon>
+            <ListItemText primary={item.label} />
+          </MenuItem>
+        ))}
+      </Menu>
     </Paper>
   );
 }

@@ -1,7 +1,10 @@
 import BadgeOutlined from '@mui/icons-material/BadgeOutlined';
+import DirectionsCarOutlined from '@mui/icons-material/DirectionsCarOutlined';
 import EventNoteOutlined from '@mui/icons-material/EventNoteOutlined';
 import GarageOutlined from '@mui/icons-material/GarageOutlined';
+import RuleOutlined from '@mui/icons-material/RuleOutlined';
 import HandymanOutlined from '@mui/icons-material/HandymanOutlined';
+import Inventory2Outlined from '@mui/icons-material/Inventory2Outlined';
 import TuneOutlined from '@mui/icons-material/TuneOutlined';
 import { paths } from '@/config/paths';
 import { canUseArea } from '@/config/roles';
@@ -34,6 +37,17 @@ export function navItemsForRole(role: Role): NavItem[] {
   if (canUseArea(role, 'manage')) {
     items.push(
       { label: 'Manage', to: paths.manage.home.getHref(), icon: <TuneOutlined />, end: true },
+      {
+        label: 'Catalogue',
+        to: paths.manage.catalogue.getHref(),
+        icon: <Inventory2Outlined />,
+      },
+      {
+        label: 'Vehicles',
+        to: paths.manage.vehicles.getHref(),
+        icon: <DirectionsCarOutlined />,
+      },
+      { label: 'Rules', to: paths.manage.rules.getHref(), icon: <RuleOutlined /> },
       { label: 'Staff', to: paths.manage.staff.getHref(), icon: <BadgeOutlined /> },
     );
   }

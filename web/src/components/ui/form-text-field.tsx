@@ -10,6 +10,8 @@ export type FormTextFieldProps = Omit<
   name: string;
   /** The visible label, which is also the field's accessible name. */
   label: string;
+  /** Called after Formik has taken the new value (e.g. to reset fields that depend on it). */
+  onChange?: TextFieldProps['onChange'];
 };
 
 /**
@@ -17,7 +19,14 @@ export type FormTextFieldProps = Omit<
  * unchanged) is shown as helper text, which MUI ties to the input with aria-describedby;
  * aria-invalid is set with it.
  */
-export function FormTextField({ name, label, helperText, id, ...props }: FormTextFieldProps) {
+export function FormTextField({
+  name,
+  label,
+  helperText,
+  id,
+  onChange,
+  ...props
+}: FormTextFieldProps) {
   const [field, meta] = useField<string>(name);
   const { status, submitCount } = useFormikContext();
   const generatedId = useId();
@@ -30,6 +39,11 @@ export function FormTextField({ name, label, helperText, id, ...props }: FormTex
     <TextField
       {...props}
       {...field}
+      onChange={(event) => {
+        field.onChange(event);
+        // A caller's own onChange runs after Formik has the new value.
+        onChange?.(event);
+      }}
       value={field.value ?? ''}
       id={id ?? `${generatedId}${name}`}
       label={label}

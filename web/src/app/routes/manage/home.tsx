@@ -20,10 +20,41 @@ export default function ManageHomeRoute() {
         }}
       >
         <LandingCard
+          title="Catalogue and prices"
+          status="Wheels, tyres, suspension kits, components and services with their prices, labour and stock. Import a CSV price list or export the catalogue."
+          actions={
+            <Button
+              component={RouterLink}
+              to={paths.manage.catalogue.getHref()}
+              variant="contained"
+            >
+              Open the catalogue
+            </Button>
+          }
+        />
+        <LandingCard
+          title="Vehicle specifications"
+          status="Spec sheets of the vehicle models the shop fits: suspension, bolt pattern, stock wheel and tyre, mass ratings."
+          actions={
+            <Button component={RouterLink} to={paths.manage.vehicles.getHref()} variant="outlined">
+              Open vehicle specs
+            </Button>
+          }
+        />
+        <LandingCard
+          title="Modification rules"
+          status="The limits each rule set applies in the fit report, with the source of every rule."
+          actions={
+            <Button component={RouterLink} to={paths.manage.rules.getHref()} variant="outlined">
+              Open the rules
+            </Button>
+          }
+        />
+        <LandingCard
           title="Staff accounts"
           status="Add front desk, technician and manager accounts, change a role, or switch an account off."
           actions={
-            <Button component={RouterLink} to={paths.manage.staff.getHref()} variant="contained">
+            <Button component={RouterLink} to={paths.manage.staff.getHref()} variant="outlined">
               Open staff accounts
             </Button>
           }
@@ -32,9 +63,6 @@ export default function ManageHomeRoute() {
           title="Workshop set-up"
           status="These parts of Manage are still to be built."
           upcoming={[
-            'Catalogue and price lists, with CSV import and export',
-            'Vehicle specifications',
-            'Modification rules per jurisdiction',
             'Bays, opening hours, closures and public holidays',
             'Labour rate, tax and deposit policy',
             'Reports',

@@ -1,0 +1,29 @@
+import type { Locator, Page } from 'playwright-core';
+
+export interface Account {
+  email: string;
+  password: string;
+}
+
+/** Signs in through the sign-in page and waits until the app has left it. */
+export async function signIn(page: Page, account: Account): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(account.email);
+  await page.getByLabel('Password').fill(account.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await page.waitForURL((url) => url.pathname !== '/sign-in');
+}
+
+/** The page's main navigation landmark (side bar on wide screens, bottom bar on phones). */
+export function mainNavigation(page: Page): Locator {
+  return page.getByRole('navigation', { name: 'Main' });
+}
+
+/** A JSON GET from inside the page, so it carries the page's session cookie. */
+export async function getJson<T>(page: Page, path: string): Promise<{ status: number; body: T }> {
+  return page.evaluate(async (target) => {
+    const response = await fetch(target, { headers: { accept: 'application/json' } });
+    const text = await response.text();
+    return { status: response.status, body: (text ? JSON.parse(text) : null) as T };
+  }, path);
+}
