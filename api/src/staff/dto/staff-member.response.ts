@@ -1,6 +1,6 @@
 import { ApiProperty } from '@nestjs/swagger';
 import type { User } from '../../users/entities/user.entity';
-import { ROLES, type Role } from '../../users/user-role';
+import { STAFF_ROLES, type StaffRole } from '../../users/user-role';
 
 export class StaffMemberResponse {
   @ApiProperty({ format: 'uuid' })
@@ -12,8 +12,8 @@ export class StaffMemberResponse {
   @ApiProperty({ example: 'Bea Corran' })
   name!: string;
 
-  @ApiProperty({ enum: ROLES, enumName: 'Role' })
-  role!: Role;
+  @ApiProperty({ enum: STAFF_ROLES, enumName: 'StaffRole' })
+  role!: StaffRole;
 
   @ApiProperty()
   active!: boolean;
@@ -22,11 +22,14 @@ export class StaffMemberResponse {
   createdAt!: string;
 
   static from(user: User): StaffMemberResponse {
+    const role = STAFF_ROLES.find((staffRole) => staffRole === user.role);
+    // The staff service only ever hands over non-customer accounts.
+    if (!role) throw new Error('A customer account is not a staff member');
     return Object.assign(new StaffMemberResponse(), {
       id: user.id,
       email: user.email,
       name: user.name,
-      role: user.role,
+      role,
       active: user.active,
       createdAt: user.createdAt.toISOString(),
     });

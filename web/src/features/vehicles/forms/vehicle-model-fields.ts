@@ -10,6 +10,7 @@ import type {
   BodyType,
   FrontSuspensionKind,
   RearSuspensionKind,
+  SpeedSymbol,
   UpdateVehicleModelRequest,
   VehicleModel,
   VehicleModelSpec,
@@ -31,7 +32,28 @@ export const rearSuspensionLabels: Record<RearSuspensionKind, string> = {
 };
 
 /** Speed symbols in ascending order of speed (H sits between U and V). */
-export const speedSymbols = ['L', 'M', 'N', 'P', 'Q', 'R', 'S', 'T', 'U', 'H', 'V', 'W', 'Y'];
+export const speedSymbols: SpeedSymbol[] = [
+  'L',
+  'M',
+  'N',
+  'P',
+  'Q',
+  'R',
+  'S',
+  'T',
+  'U',
+  'H',
+  'V',
+  'W',
+  'Y',
+];
+
+/** The form's schema lets only a listed symbol through; anything else is a programming error. */
+function toSpeedSymbol(value: string): SpeedSymbol {
+  const symbol = speedSymbols.find((candidate) => candidate === value);
+  if (!symbol) throw new Error(`Not a speed symbol: ${value}`);
+  return symbol;
+}
 
 /** The load indices the API's load table holds. */
 export const LOWEST_LOAD_INDEX = 60;
@@ -203,7 +225,7 @@ export function vehicleModelSpec(values: VehicleModelFormValues): VehicleModelSp
     rearAxleKg: Number(values.rearAxleKg),
     kerbMassKg: Number(values.kerbMassKg),
     placardLoadIndex: Number(values.placardLoadIndex),
-    placardSpeedSymbol: values.placardSpeedSymbol,
+    placardSpeedSymbol: toSpeedSymbol(values.placardSpeedSymbol),
     frontHalfShaftLengthMm: numberFromText(values.frontHalfShaftLengthMm),
     offRoadCategory: values.offRoadCategory,
     topSpeedKmh: numberFromText(values.topSpeedKmh),
