@@ -5,12 +5,17 @@ export interface Account {
   password: string;
 }
 
-/** Signs in through the sign-in page and waits until the app has left it. */
-export async function signIn(page: Page, account: Account): Promise<void> {
+/** Fills in and sends the sign-in form, without waiting for the outcome. */
+export async function submitSignIn(page: Page, account: Account): Promise<void> {
   await page.goto('/sign-in');
   await page.getByLabel('E-mail').fill(account.email);
   await page.getByLabel('Password').fill(account.password);
   await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** Signs in through the sign-in page and waits until the app has left it. */
+export async function signIn(page: Page, account: Account): Promise<void> {
+  await submitSignIn(page, account);
   await page.waitForURL((url) => url.pathname !== '/sign-in');
 }
 

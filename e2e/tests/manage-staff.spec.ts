@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import { launchBrowser, newPage, screenshot, type ViewportName } from '../support/browser';
 import { demoUsers } from '../support/env';
+import { signIn } from '../support/session';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -11,20 +12,13 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function signIn(page: Page, email: string, password: string) {
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
-
 describe('the manager keeps staff accounts', () => {
   for (const viewport of ['desktop', 'phone'] as ViewportName[]) {
     it(`adds a technician, changes them to front desk, and they sign in to the desk (${viewport})`, async () => {
       const email = `new.hand.${viewport}.${Date.now()}@liftwright.example`;
       const name = `Sam Spanner ${viewport} ${Date.now() % 100000}`;
       const manager = await newPage(browser, viewport);
-      await signIn(manager.page, demoUsers.manager.email, demoUsers.manager.password);
+      await signIn(manager.page, demoUsers.manager);
       await manager.page.waitForURL('**/manage');
       await manager.page.goto('/manage/staff');
 
@@ -51,7 +45,7 @@ describe('the manager keeps staff accounts', () => {
       await manager.context.close();
 
       const newcomer = await newPage(browser, viewport);
-      await signIn(newcomer.page, email, 'spanner-passphrase-1');
+      await signIn(newcomer.page, { email, password: 'spanner-passphrase-1' });
       await newcomer.page.waitForURL('**/desk');
       await expect
         .poll(() =>
@@ -64,7 +58,7 @@ describe('the manager keeps staff accounts', () => {
 
   it('a technician cannot open the staff page or call its API', async () => {
     const { context, page } = await newPage(browser, 'phone');
-    await signIn(page, demoUsers.tech.email, demoUsers.tech.password);
+    await signIn(page, demoUsers.tech);
     await page.waitForURL('**/workshop');
     await page.goto('/manage/staff');
     await page.waitForURL('**/workshop');

@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, newPage, screenshot, type ViewportName } from '../support/browser';
 import { demoUsers } from '../support/env';
+import { signIn, submitSignIn } from '../support/session';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -19,13 +20,6 @@ const roles = {
   manager: { home: '/manage', heading: 'Manage', areas: ['/desk', '/manage'] },
 } as const;
 
-async function signIn(page: Page, email: string, password: string) {
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
-
 async function navigationTargets(page: Page): Promise<string[]> {
   return page
     .locator('nav[aria-label="Main"] a[href]')
@@ -38,7 +32,7 @@ describe('each role signs in and sees its own navigation', () => {
       it(`${role} (${viewport})`, async () => {
         const { context, page } = await newPage(browser, viewport);
         const account = demoUsers[role as keyof typeof demoUsers];
-        await signIn(page, account.email, account.password);
+        await signIn(page, account);
         await page.waitForURL(`**${expected.home}`);
         await expect
           .poll(() => page.getByRole('heading', { level: 1, name: expected.heading }).isVisible())
@@ -71,7 +65,7 @@ describe('each role signs in and sees its own navigation', () => {
 
   it('a wrong password is refused with one generic message', async () => {
     const { context, page } = await newPage(browser, 'phone');
-    await signIn(page, demoUsers.desk.email, 'not-the-password');
+    await submitSignIn(page, { email: demoUsers.desk.email, password: 'not-the-password' });
     await expect
       .poll(() => page.getByText('E-mail or password is not right').count())
       .toBeGreaterThan(0);
