@@ -9,10 +9,15 @@ import { Product } from './catalogue/entities/product.entity';
 import { validateDatabaseEnvironment } from './config/environment';
 import { CustomerVehicle } from './customer-vehicles/entities/customer-vehicle.entity';
 import { MIGRATIONS } from './database/migrations-list';
+import { QuoteLine } from './quotes/entities/quote-line.entity';
+import { QuoteVersion } from './quotes/entities/quote-version.entity';
+import { Quote } from './quotes/entities/quote.entity';
 import { RuleSet } from './rule-sets/entities/rule-set.entity';
+import { Upload } from './uploads/entities/upload.entity';
 import { User } from './users/entities/user.entity';
 import { StockWheel } from './vehicles/entities/stock-wheel.embeddable';
 import { VehicleModel } from './vehicles/entities/vehicle-model.entity';
+import { Workshop } from './workshop/entities/workshop.entity';
 
 /**
  * The one ORM configuration, used by MikroOrmModule.forRootAsync, by database/cli.ts and by the
@@ -33,6 +38,11 @@ export function createOrmConfig(databaseUrl: string, { writeSnapshot = true } = 
       CustomerVehicle,
       Product,
       RuleSet,
+      Workshop,
+      Quote,
+      QuoteVersion,
+      QuoteLine,
+      Upload,
     ],
     forceUtcTimezone: true,
     ensureDatabase: false,

@@ -1,0 +1,91 @@
+import { Entity, Enum, Property } from '@mikro-orm/core';
+import { BaseEntity } from '../../database/base.entity';
+import {
+  type PricingProductKind,
+  TAX_ROUNDING_METHODS,
+  type TaxRoundingMethod,
+} from '../../pricing/pricing.types';
+
+/** The workshop's card: what a quote, a PDF and an e-mail show about the shop. */
+export interface WorkshopCardFields {
+  name: string;
+  addressLine: string;
+  town: string;
+  phone: string;
+  email: string;
+  /** IANA time zone name, e.g. Australia/Sydney. */
+  timeZone: string;
+  /** ISO 4217 code. */
+  currency: string;
+}
+
+/**
+ * The one workshop this installation serves: its card and its pricing policy (Manage →
+ * Policies). Percentages are stored as whole basis points (1000 = 10 %), money as integer cents.
+ */
+@Entity()
+export class Workshop extends BaseEntity {
+  @Property({ type: 'string', length: 120 })
+  name!: string;
+
+  @Property({ type: 'string', length: 160 })
+  addressLine!: string;
+
+  @Property({ type: 'string', length: 80 })
+  town!: string;
+
+  @Property({ type: 'string', length: 40 })
+  phone!: string;
+
+  @Property({ type: 'string', length: 254 })
+  email!: string;
+
+  @Property({ type: 'string', length: 64 })
+  timeZone!: string;
+
+  @Property({ type: 'string', length: 3 })
+  currency!: string;
+
+  @Property({ type: 'integer' })
+  labourRateCentsPerHour!: number;
+
+  @Property({ type: 'boolean' })
+  pricesIncludeTax!: boolean;
+
+  @Property({ type: 'integer' })
+  taxRateBasisPoints!: number;
+
+  @Enum({ items: () => [...TAX_ROUNDING_METHODS], type: 'string' })
+  taxRoundingMethod!: TaxRoundingMethod;
+
+  @Property({ type: 'integer' })
+  fittingBalancingCentsPerWheel!: number;
+
+  @Property({ type: 'integer' })
+  tyreDisposalCentsPerTyre!: number;
+
+  @Property({ type: 'boolean' })
+  bundleDiscountEnabled!: boolean;
+
+  @Property({ type: 'integer' })
+  bundleDiscountBasisPoints!: number;
+
+  /** The package must hold a line of each of these kinds for the bundle discount. */
+  @Property({ type: 'json' })
+  bundleRequiresKinds!: PricingProductKind[];
+
+  @Property({ type: 'integer' })
+  depositBasisPoints!: number;
+
+  @Property({ type: 'integer' })
+  depositFloorCents!: number;
+
+  @Property({ type: 'integer' })
+  depositCapCents!: number;
+
+  @Property({ type: 'integer' })
+  depositSpecialOrderBasisPoints!: number;
+
+  @Property({ type: 'integer' })
+  quoteValidDays!: number;
+}
