@@ -103,6 +103,8 @@ function apiEnv(
     PUBLIC_URL: publicUrl,
     SMTP_URL: `smtp://127.0.0.1:${ports.smtp}`,
     WEB_DIST_DIR: join(ROOT, 'web', 'dist'),
+    // Customer photos: outside the web root, one folder per database so tests start empty.
+    UPLOAD_DIR: join(DATA, 'uploads', database),
   };
 }
 
@@ -320,6 +322,7 @@ async function testStack(): Promise<never> {
     // A fresh database for the browser journeys, migrated and seeded exactly as `npm start` does.
     await postgres.recreateDatabase(pg, 'liftwright_e2e');
     const e2eEnv = apiEnv('liftwright_e2e', ports, appUrl, 'production');
+    rmSync(e2eEnv.UPLOAD_DIR as string, { recursive: true, force: true });
     await migrateAndSeed(e2eEnv);
     log.step('Checking that the entities and the committed migrations agree');
     checks.push({
