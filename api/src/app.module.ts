@@ -22,15 +22,19 @@ import { requestIdFor } from './common/request-id';
 import { AppConfigModule } from './config/app-config.module';
 import { AppConfigService } from './config/app-config.service';
 import { CustomerVehiclesModule } from './customer-vehicles/customer-vehicles.module';
+import { CustomersModule } from './customers/customers.module';
 import { PgPoolModule } from './database/pg-pool.module';
 import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { createOrmConfig } from './mikro-orm.config';
+import { QuotesModule } from './quotes/quotes.module';
 import { RuleSetsModule } from './rule-sets/rule-sets.module';
 import { StaffModule } from './staff/staff.module';
+import { UploadsModule } from './uploads/uploads.module';
 import { UsersModule } from './users/users.module';
 import { VehiclesModule } from './vehicles/vehicles.module';
+import { WorkshopModule } from './workshop/workshop.module';
 
 /** Every path below the global prefix (Nest 11 / path-to-regexp 8 wildcard). */
 const ALL_ROUTES = { path: '{*path}', method: RequestMethod.ALL };
@@ -94,6 +98,10 @@ function insideNest(handler: RequestHandler): RequestHandler {
     CatalogueModule,
     RuleSetsModule,
     FitReportsModule,
+    WorkshopModule,
+    QuotesModule,
+    UploadsModule,
+    CustomersModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

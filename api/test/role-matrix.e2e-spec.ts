@@ -55,6 +55,29 @@ const INTENDED_ACCESS: Record<string, Principal[]> = {
   'GET /api/rule-sets': ['desk', 'manager'],
   'GET /api/rule-sets/:id': ['desk', 'manager'],
   'PATCH /api/rule-sets/:id': ['manager'],
+  // Issue 4: workshop card and pricing policy, planner options and quotes.
+  'GET /api/workshop': PRINCIPALS,
+  'GET /api/policies': ['desk', 'manager'],
+  'PUT /api/policies': ['manager'],
+  'POST /api/planner/options': PRINCIPALS,
+  'POST /api/quotes/preview': PRINCIPALS,
+  'POST /api/quotes': ['customer', 'desk', 'manager'],
+  'GET /api/quotes': ['customer', 'desk', 'manager'],
+  'GET /api/quotes/:id': ['customer', 'desk', 'manager'],
+  'GET /api/quotes/:id/versions/:n/pdf': ['customer', 'desk', 'manager'],
+  'POST /api/quotes/:id/versions/:n/accept': ['customer'],
+  'POST /api/quotes/:id/versions/:n/decline': ['customer'],
+  'POST /api/quotes/:id/versions/:n/send': ['desk', 'manager'],
+  // Issue 4: customer photos and customers for walk-in quotes. The matrix sends POST
+  // /api/uploads as JSON, not multipart: allowed callers get 400 (no photo), which is enough to
+  // tell them from the refused ones (401/403 come from the guards before the body is read).
+  'POST /api/uploads': ['customer', 'desk', 'manager'],
+  'GET /api/uploads': ['customer', 'desk', 'manager'],
+  'GET /api/uploads/:id': SIGNED_IN,
+  'GET /api/uploads/:id/thumbnail': SIGNED_IN,
+  'DELETE /api/uploads/:id': ['customer', 'desk', 'manager'],
+  'GET /api/customers': ['desk', 'manager'],
+  'POST /api/customers': ['desk', 'manager'],
 };
 
 function sorted(principals: Principal[]): string {

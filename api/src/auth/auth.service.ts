@@ -99,18 +99,10 @@ export class AuthService {
     if (!user || !user.active) return;
     if (!(await this.throttle.allowResetMail(user.email))) return;
 
-    const token = randomBytes(32).toString('base64url');
     await this.em.nativeDelete(PasswordResetToken, { user, usedAt: null });
-    this.em.persist(
-      new PasswordResetToken(
-        user,
-        hashResetToken(token),
-        new Date(Date.now() + PASSWORD_RESET_TTL_MS),
-      ),
-    );
+    const resetUrl = this.addPasswordLinkToken(this.em, user, PASSWORD_RESET_TTL_MS);
     await this.em.flush();
 
-    const resetUrl = `${this.config.publicUrl}/reset-password?token=${encodeURIComponent(token)}`;
     this.mail.sendInBackground(
       user.email,
       passwordResetMail({
@@ -119,6 +111,19 @@ export class AuthService {
         validForMinutes: PASSWORD_RESET_TTL_MS / 60_000,
       }),
     );
+  }
+
+  /**
+   * Adds (persists, does not flush) a one-time token for `user`, stored as its SHA-256, and
+   * returns the link that uses it: the reset link, also sent to a customer the desk created so
+   * they can choose their first password. Confirming works the same for both.
+   */
+  addPasswordLinkToken(em: EntityManager, user: User, validForMs: number): string {
+    const token = randomBytes(32).toString('base64url');
+    em.persist(
+      new PasswordResetToken(user, hashResetToken(token), new Date(Date.now() + validForMs)),
+    );
+    return `${this.config.publicUrl}/reset-password?token=${encodeURIComponent(token)}`;
   }
 
   /** Uses a reset token once: sets the new password and ends the user's sessions. */

@@ -17,6 +17,12 @@ export const ARGON2_OPTIONS = {
 /** A password reset link stays valid for one hour. */
 export const PASSWORD_RESET_TTL_MS = 60 * 60 * 1000;
 
+/**
+ * The set-password link e-mailed to a customer the desk created: 72 hours, since it is often
+ * opened after the visit. An unused one is replaced when the customer asks for a reset.
+ */
+export const SET_PASSWORD_TTL_MS = 72 * 60 * 60 * 1000;
+
 /** Failed sign-ins allowed in one window, per account (e-mail) and per client address. */
 export const SIGN_IN_THROTTLE = {
   windowSeconds: 15 * 60,

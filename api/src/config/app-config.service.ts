@@ -64,4 +64,9 @@ export class AppConfigService {
   get trustProxy(): boolean {
     return this.config.get('TRUST_PROXY', { infer: true });
   }
+
+  /** Absolute path of the customer photo folder (exists and is writable: checked at start-up). */
+  get uploadDir(): string {
+    return this.config.get('UPLOAD_DIR', { infer: true });
+  }
 }

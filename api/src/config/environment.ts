@@ -1,5 +1,5 @@
-import { existsSync, statSync } from 'node:fs';
-import { join } from 'node:path';
+import { accessSync, constants, existsSync, mkdirSync, statSync } from 'node:fs';
+import { join, resolve } from 'node:path';
 import { plainToInstance, Transform } from 'class-transformer';
 import {
   IsBoolean,
@@ -60,6 +60,35 @@ function IsFolderWithIndexHtml(options: ValidationOptions) {
     },
     options,
   );
+}
+
+/**
+ * A folder the API can write to: created (with its parents, owner-only) when missing. Runs at
+ * start-up, so a folder that cannot be made or written stops the API with a clear message
+ * instead of failing the first upload.
+ */
+export function isWritableFolder(value: unknown): boolean {
+  if (typeof value !== 'string' || value.trim() === '') return false;
+  try {
+    mkdirSync(value, { recursive: true, mode: 0o700 });
+    if (!statSync(value).isDirectory()) return false;
+    accessSync(value, constants.W_OK | constants.X_OK);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
+function IsWritableFolder(options: ValidationOptions) {
+  return ValidateBy(
+    { name: 'isWritableFolder', validator: { validate: isWritableFolder } },
+    options,
+  );
+}
+
+/** The upload folder when UPLOAD_DIR is not set: `.data/uploads` below the working directory. */
+export function defaultUploadDir(): string {
+  return join(process.cwd(), '.data', 'uploads');
 }
 
 /** A whole number written in decimal digits, or NaN so that @IsInt reports it. */
@@ -146,6 +175,16 @@ export class Environment extends DatabaseEnvironment {
   @Transform(toBoolean)
   @IsBoolean({ message: '$property must be true or false' })
   TRUST_PROXY = false;
+
+  /**
+   * Customer photos (originals and thumbnails, random names). Keep it outside the web root:
+   * the files are served only through the authorised upload routes. Stored as an absolute path.
+   */
+  @Transform(({ value }: { value: unknown }) =>
+    typeof value === 'string' ? resolve(value) : value,
+  )
+  @IsWritableFolder({ message: '$property must be a folder the API can create and write to' })
+  UPLOAD_DIR = defaultUploadDir();
 }
 
 type RawEnvironment = Record<string, unknown>;
@@ -185,6 +224,7 @@ const ENVIRONMENT_KEYS = [
   'SESSION_IDLE_MINUTES',
   'SESSION_MAX_HOURS',
   'TRUST_PROXY',
+  'UPLOAD_DIR',
 ] as const;
 
 /**

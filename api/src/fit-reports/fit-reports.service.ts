@@ -78,6 +78,28 @@ export function summaryOf(report: FitReport): string {
   return `${VERDICT_OPENINGS[report.verdict]}: ${deciding?.message ?? ''}`.trim();
 }
 
+/** The engine's input for a package of loaded products (at most one wheel, tyre and kit). */
+export function fitmentInputOf(
+  vehicle: VehicleModel,
+  products: Product[],
+  kitOtherRatings: Product[],
+  constantLoadKg?: number,
+): FitmentInput {
+  const kit = products.find((product) => product.kind === 'suspension-kit');
+  const wheel = products.find((product) => product.kind === 'wheel');
+  const tyre = products.find((product) => product.kind === 'tyre');
+  return {
+    vehicle: vehicleSpecOf(vehicle),
+    ...(wheel ? { wheel: wheelSpecOf(wheel) } : {}),
+    ...(tyre ? { tyre: tyreSpecOf(tyre) } : {}),
+    ...(kit ? { suspensionKit: suspensionKitSpecOf(kit, kitOtherRatings) } : {}),
+    components: products
+      .map((product) => componentSpecOf(product))
+      .filter((component) => component !== null),
+    ...(constantLoadKg !== undefined ? { usage: { constantLoadKg } } : {}),
+  };
+}
+
 @Injectable()
 export class FitReportsService {
   constructor(
@@ -143,23 +165,45 @@ export class FitReportsService {
       throw new FieldErrorsException(errors);
     }
 
+    return FitReportResponse.from(
+      await this.reportFor(vehicle, products, ruleSet, dto.constantLoadKg),
+    );
+  }
+
+  /**
+   * The fit report of products already loaded (at most one wheel, tyre and kit; checked by the
+   * caller). The kit's other spring ratings are looked up in the catalogue (one query).
+   */
+  async reportFor(
+    vehicle: VehicleModel,
+    products: Product[],
+    ruleSet: RuleSetLimits,
+    constantLoadKg?: number,
+  ): Promise<FitReport> {
     const kit = products.find((product) => product.kind === 'suspension-kit');
     const otherRatings = kit ? await this.otherRatingsOf(kit, vehicle) : [];
-    const wheel = products.find((product) => product.kind === 'wheel');
-    const tyre = products.find((product) => product.kind === 'tyre');
-    const input: FitmentInput = {
-      vehicle: vehicleSpecOf(vehicle),
-      ...(wheel ? { wheel: wheelSpecOf(wheel) } : {}),
-      ...(tyre ? { tyre: tyreSpecOf(tyre) } : {}),
-      ...(kit ? { suspensionKit: suspensionKitSpecOf(kit, otherRatings) } : {}),
-      components: products
-        .map((product) => componentSpecOf(product))
-        .filter((component) => component !== null),
-      ...(dto.constantLoadKg !== undefined
-        ? { usage: { constantLoadKg: dto.constantLoadKg } }
-        : {}),
-    };
-    return FitReportResponse.from(checkFitment(input, ruleSet));
+    return checkFitment(fitmentInputOf(vehicle, products, otherRatings, constantLoadKg), ruleSet);
+  }
+
+  /**
+   * As `reportFor`, without a query: the kit's other spring ratings are found in
+   * `catalogueKits` (active kits with fitsVehicleModels loaded). For callers that check many
+   * packages (the planner) or must stay within a few queries (the quote preview).
+   */
+  reportWith(
+    vehicle: VehicleModel,
+    products: Product[],
+    ruleSet: RuleSetLimits,
+    catalogueKits: Product[],
+    constantLoadKg?: number,
+  ): FitReport {
+    const kit = products.find((product) => product.kind === 'suspension-kit');
+    const otherRatings = kit
+      ? catalogueKits.filter(
+          (candidate) => isOtherRatingOf(kit, candidate) && isMadeFor(candidate, vehicle.id),
+        )
+      : [];
+    return checkFitment(fitmentInputOf(vehicle, products, otherRatings, constantLoadKg), ruleSet);
   }
 
   /**
@@ -202,11 +246,15 @@ export class FitReportsService {
     return this.ruleSets.engineRuleSet(id);
   }
 
-  private async otherRatingsOf(kit: Product, vehicle: VehicleModel): Promise<Product[]> {
+  /**
+   * The kit's other spring ratings made for the vehicle: the active kits of the same brand and
+   * lifts (one query; the vehicle links are loaded as ids only).
+   */
+  async otherRatingsOf(kit: Product, vehicle: VehicleModel): Promise<Product[]> {
     const candidates = await this.em.find(
       Product,
       { kind: 'suspension-kit', brand: kit.brand, active: true, id: { $ne: kit.id } },
-      { populate: ['fitsVehicleModels'] },
+      { populate: ['fitsVehicleModels:ref'] },
     );
     return candidates.filter(
       (candidate) => isOtherRatingOf(kit, candidate) && isMadeFor(candidate, vehicle.id),

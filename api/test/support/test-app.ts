@@ -1,3 +1,6 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { Pool } from 'pg';
 import { createApp } from '../../src/create-app';
@@ -22,6 +25,11 @@ export async function startTestApp(): Promise<TestApp> {
   const mailbox = new Mailbox();
   await mailbox.start();
   process.env.SMTP_URL = mailbox.url;
+  // Photos go to a folder of this run (a spec may set its own UPLOAD_DIR to look into it).
+  const ownUploadDir = process.env.UPLOAD_DIR
+    ? undefined
+    : mkdtempSync(join(tmpdir(), 'liftwright-test-uploads-'));
+  if (ownUploadDir) process.env.UPLOAD_DIR = ownUploadDir;
   const app = await createApp();
   await app.init();
   const db = new Pool({ connectionString: testDatabaseUrl(), max: 2 });
@@ -34,6 +42,10 @@ export async function startTestApp(): Promise<TestApp> {
       await app.close();
       await db.end();
       await mailbox.stop();
+      if (ownUploadDir) {
+        rmSync(ownUploadDir, { recursive: true, force: true });
+        delete process.env.UPLOAD_DIR;
+      }
     },
   };
 }
