@@ -5,6 +5,7 @@ import { SeedManager } from '@mikro-orm/seeder';
 import { AuthThrottleCounter } from './auth/entities/auth-throttle-counter.entity';
 import { HttpSession } from './auth/entities/http-session.entity';
 import { PasswordResetToken } from './auth/entities/password-reset-token.entity';
+import { CatalogueRevision } from './catalogue/entities/catalogue-revision.entity';
 import { Product } from './catalogue/entities/product.entity';
 import { validateDatabaseEnvironment } from './config/environment';
 import { CustomerVehicle } from './customer-vehicles/entities/customer-vehicle.entity';
@@ -37,6 +38,7 @@ export function createOrmConfig(databaseUrl: string, { writeSnapshot = true } = 
       StockWheel,
       CustomerVehicle,
       Product,
+      CatalogueRevision,
       RuleSet,
       Workshop,
       Quote,

@@ -2,6 +2,7 @@ import type { MigrationObject } from '@mikro-orm/core';
 import { Migration20261201220656 } from './migrations/Migration20261201220656';
 import { Migration20261201225254 } from './migrations/Migration20261201225254';
 import { Migration20261202014939 } from './migrations/Migration20261202014939';
+import { Migration20261202025114 } from './migrations/Migration20261202025114';
 
 /**
  * Every migration, oldest first. Listed explicitly (rather than found by a file glob) so the same
@@ -12,4 +13,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201220656', class: Migration20261201220656 },
   { name: 'Migration20261201225254', class: Migration20261201225254 },
   { name: 'Migration20261202014939', class: Migration20261202014939 },
+  { name: 'Migration20261202025114', class: Migration20261202025114 },
 ];

@@ -1,5 +1,6 @@
 import { Body, Controller, HttpCode, HttpStatus, Post, UseInterceptors } from '@nestjs/common';
 import { ApiBadRequestResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
+import { ComputesOnly } from '../common/decorators/computes-only.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import { ErrorResponse } from '../common/filters/error.response';
 import { ArrayIndexKeysInterceptor } from './array-index-keys.interceptor';
@@ -14,6 +15,7 @@ export class PlannerController {
   constructor(private readonly planner: PlannerService) {}
 
   @Public()
+  @ComputesOnly()
   @Post('options')
   @HttpCode(HttpStatus.OK)
   @ApiOperation({

@@ -1,4 +1,3 @@
-import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable } from '@nestjs/common';
 import { ProductResponse } from '../catalogue/dto/product.response';
 import { Product } from '../catalogue/entities/product.entity';
@@ -11,11 +10,10 @@ import {
   type SuggestedAddition,
   VERDICTS_WORST_FIRST,
 } from '../fitment/fitment.types';
-import { VehicleModel } from '../vehicles/entities/vehicle-model.entity';
+import { CatalogueSnapshotService } from './catalogue-snapshot.service';
 import type { PlannerOptionsDto } from './dto/planner-options.dto';
 import type { PlannerOptionResponse, PlannerOptionsResponse } from './dto/planner-options.response';
 import {
-  QuotePackagesService,
   isPolicyChargedService,
   isSingleKind,
   selectionErrors,
@@ -53,24 +51,18 @@ export function rolesFilledBy(
 @Injectable()
 export class PlannerService {
   constructor(
-    private readonly em: EntityManager,
     private readonly fitReports: FitReportsService,
-    private readonly packages: QuotePackagesService,
+    private readonly snapshots: CatalogueSnapshotService,
   ) {}
 
   async options(dto: PlannerOptionsDto): Promise<PlannerOptionsResponse> {
     const ids = [...new Set(dto.items.map((item) => item.productId))];
-    const [vehicle, loaded, ruleSet] = await Promise.all([
-      this.em.findOne(VehicleModel, { id: dto.vehicleModelId }),
-      this.em.find(
-        Product,
-        {
-          $or: [{ id: { $in: ids } }, { kind: dto.kind, active: true }],
-        },
-        { populate: ['fitsVehicleModels:ref'] },
-      ),
-      this.packages.defaultRuleSet(),
-    ]);
+    const snapshot = await this.snapshots.current();
+    const vehicle = snapshot.vehicles.get(dto.vehicleModelId) ?? null;
+    const loaded = [...snapshot.products.values()].filter(
+      (product) => ids.includes(product.id) || (product.kind === dto.kind && product.active),
+    );
+    const { ruleSet } = snapshot;
     const errors: FieldErrors = {};
     if (!vehicle) errors.vehicleModelId = ['no vehicle model has this id'];
     const products = new Map(loaded.map((product) => [product.id, product]));
@@ -86,7 +78,13 @@ export class PlannerService {
       dto.kind === 'suspension-kit'
         ? loaded.filter((product) => product.kind === 'suspension-kit' && product.active)
         : selectedKit
-          ? await this.fitReports.otherRatingsOf(selectedKit, vehicle)
+          ? [...snapshot.products.values()].filter(
+              (product) =>
+                product.kind === 'suspension-kit' &&
+                product.active &&
+                product.brand === selectedKit.brand &&
+                product.id !== selectedKit.id,
+            )
           : [];
     const constantLoadKg = dto.constantLoadKg ?? 0;
     const current = this.fitReports.reportWith(vehicle, selected, ruleSet, kits, constantLoadKg);

@@ -14,7 +14,9 @@ import type { PackageLine, PackagePrice } from '../pricing/pricing.types';
 import { quoteValidUntilDate } from '../pricing/quote-validity';
 import type { User } from '../users/entities/user.entity';
 import { VehicleModel } from '../vehicles/entities/vehicle-model.entity';
-import { type WorkshopSettings, WorkshopService } from '../workshop/workshop.service';
+import { type WorkshopSettings, settingsOf } from '../workshop/workshop.service';
+import { CatalogueSnapshotService } from './catalogue-snapshot.service';
+import { PackageDataLoader } from './package-data.loader';
 import { endOfLocalDay, localDateOf } from '../workshop/workshop-time';
 
 /** Main parts a package holds at most one of. */
@@ -163,16 +165,17 @@ export interface PricedPackage {
 
 /**
  * Turns a package request into the priced package: the catalogue values now, the workshop's
- * policy now, the default rule set. Four queries whatever the size (vehicle, the items with their
- * vehicle links, rule set, workshop) run side by side, and a fifth for the other spring ratings
- * when the package holds a kit; nothing is written.
+ * policy now, the default rule set. One query whatever the size (PackageDataLoader: vehicle,
+ * customer vehicle, the items with their vehicle links, the kits' other spring ratings, rule set,
+ * workshop); nothing is written.
  */
 @Injectable()
 export class QuotePackagesService {
   constructor(
     private readonly em: EntityManager,
     private readonly fitReports: FitReportsService,
-    private readonly workshop: WorkshopService,
+    private readonly data: PackageDataLoader,
+    private readonly snapshots: CatalogueSnapshotService,
   ) {}
 
   async price(
@@ -181,32 +184,13 @@ export class QuotePackagesService {
     now = new Date(),
   ): Promise<PricedPackage> {
     const ids = [...new Set(request.items.map((item) => item.productId))];
-    const loadVehicle = () => this.em.findOne(VehicleModel, { id: request.vehicleModelId });
-    const loadCustomerVehicle = () =>
-      request.customerVehicleId
-        ? this.em.findOne(CustomerVehicle, { id: request.customerVehicleId })
-        : Promise.resolve(null);
-    // The items in one query, their vehicle links as ids only.
-    const loadProducts = () =>
-      this.em.find(Product, { id: { $in: ids } }, { populate: ['fitsVehicleModels:ref'] });
-    const loadRuleSet = () => this.defaultRuleSet();
-    const loadSettings = () => this.workshop.settings();
-    // Side by side on the pool; one after the other on a transaction's single connection.
-    const [vehicle, customerVehicle, loaded, ruleSet, settings] = this.em.isInTransaction()
-      ? [
-          await loadVehicle(),
-          await loadCustomerVehicle(),
-          await loadProducts(),
-          await loadRuleSet(),
-          await loadSettings(),
-        ]
-      : await Promise.all([
-          loadVehicle(),
-          loadCustomerVehicle(),
-          loadProducts(),
-          loadRuleSet(),
-          loadSettings(),
-        ]);
+    // Saving reads inside its transaction; a preview uses the revision-checked snapshot.
+    const data = this.em.isInTransaction()
+      ? await this.data.load(request.vehicleModelId, ids, request.customerVehicleId)
+      : await this.snapshots.packageData(request.vehicleModelId, ids, request.customerVehicleId);
+    const { vehicle, customerVehicle, ruleSet } = data;
+    const loaded = data.products;
+    const settings = settingsOf(data.workshop);
 
     const errors: FieldErrors = {};
     if (!vehicle) errors.vehicleModelId = ['no vehicle model has this id'];
@@ -233,10 +217,11 @@ export class QuotePackagesService {
     const { wheelsFitted, tyresReplaced } = wheelAndTyreCounts(selected);
     const constantLoadKg = request.constantLoadKg ?? 0;
     // With a kit, one more query finds its other spring ratings (the report may suggest one).
-    const fitReport = await this.fitReports.reportFor(
+    const fitReport = this.fitReports.reportWith(
       vehicle,
       selected.map((entry) => entry.product),
       ruleSet,
+      data.brandKits,
       constantLoadKg,
     );
 

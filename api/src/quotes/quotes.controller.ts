@@ -21,6 +21,7 @@ import {
   ApiTags,
 } from '@nestjs/swagger';
 import { CurrentUser, OptionalCurrentUser } from '../common/decorators/current-user.decorator';
+import { ComputesOnly } from '../common/decorators/computes-only.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import { Roles } from '../common/decorators/roles.decorator';
 import { IdParams } from '../common/dto/id.params';
@@ -43,6 +44,7 @@ export class QuotesController {
   constructor(private readonly quotes: QuotesService) {}
 
   @Public()
+  @ComputesOnly()
   @Post('preview')
   @HttpCode(HttpStatus.OK)
   @ApiOperation({

@@ -13,6 +13,8 @@ import { PlannerController } from './planner.controller';
 import { PlannerService } from './planner.service';
 import { QuotePackagesService } from './quote-packages.service';
 import { QuotesController } from './quotes.controller';
+import { CatalogueSnapshotService } from './catalogue-snapshot.service';
+import { PackageDataLoader } from './package-data.loader';
 import { QuotesService } from './quotes.service';
 
 @Module({
@@ -30,7 +32,13 @@ import { QuotesService } from './quotes.service';
     WorkshopModule,
   ],
   controllers: [QuotesController, PlannerController],
-  providers: [QuotesService, QuotePackagesService, PlannerService],
+  providers: [
+    QuotesService,
+    QuotePackagesService,
+    PlannerService,
+    PackageDataLoader,
+    CatalogueSnapshotService,
+  ],
   exports: [QuotesService],
 })
 export class QuotesModule {}

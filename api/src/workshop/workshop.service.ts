@@ -20,6 +20,15 @@ export interface WorkshopSettings {
  * The one workshop row: its card and its pricing policy. Read per request (several API
  * processes may serve the shop, so nothing is cached in memory).
  */
+/** The card, policy and time zone of a workshop row already loaded. */
+export function settingsOf(workshop: Workshop): WorkshopSettings {
+  return {
+    card: WorkshopCardResponse.from(workshop),
+    pricingPolicy: pricingPolicyOf(workshop),
+    timeZone: workshop.timeZone,
+  };
+}
+
 @Injectable()
 export class WorkshopService {
   constructor(private readonly em: EntityManager) {}
@@ -29,12 +38,7 @@ export class WorkshopService {
   }
 
   async settings(): Promise<WorkshopSettings> {
-    const workshop = await this.load();
-    return {
-      card: WorkshopCardResponse.from(workshop),
-      pricingPolicy: pricingPolicyOf(workshop),
-      timeZone: workshop.timeZone,
-    };
+    return settingsOf(await this.load());
   }
 
   /** The pricing engine's policy. */

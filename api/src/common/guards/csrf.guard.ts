@@ -4,8 +4,11 @@ import {
   ForbiddenException,
   Injectable,
 } from '@nestjs/common';
+import { Reflector } from '@nestjs/core';
 import { csrfSync } from 'csrf-sync';
 import type { Request } from 'express';
+import { COMPUTES_ONLY_KEY } from '../decorators/computes-only.decorator';
+import { IS_PUBLIC_KEY } from '../decorators/public.decorator';
 
 export const CSRF_HEADER = 'x-csrf-token';
 export const CSRF_ERROR_MESSAGE = 'Missing or invalid CSRF token';
@@ -30,13 +33,25 @@ export function issueCsrfToken(request: Request, renew = false): string {
   return csrf.generateToken(request, renew);
 }
 
-/** Global guard: a state-changing request without the session's token is refused with 403. */
+/**
+ * Global guard: a state-changing request without the session's token is refused with 403. A
+ * public route marked @ComputesOnly() (it writes nothing) needs no token.
+ */
 @Injectable()
 export class CsrfGuard implements CanActivate {
+  constructor(private readonly reflector: Reflector) {}
+
   canActivate(context: ExecutionContext): boolean {
     if (context.getType() !== 'http') return true;
     const request = context.switchToHttp().getRequest<Request>();
     if (SAFE_METHODS.has(request.method)) return true;
+    const targets = [context.getHandler(), context.getClass()];
+    if (
+      this.reflector.getAllAndOverride<boolean>(COMPUTES_ONLY_KEY, targets) === true &&
+      this.reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, targets) === true
+    ) {
+      return true;
+    }
     if (request.session && csrf.isRequestValid(request)) return true;
     throw new ForbiddenException(CSRF_ERROR_MESSAGE);
   }
