@@ -13,11 +13,7 @@ import {
 import { CatalogueSnapshotService } from './catalogue-snapshot.service';
 import type { PlannerOptionsDto } from './dto/planner-options.dto';
 import type { PlannerOptionResponse, PlannerOptionsResponse } from './dto/planner-options.response';
-import {
-  isPolicyChargedService,
-  isSingleKind,
-  selectionErrors,
-} from './quote-packages.service';
+import { isPolicyChargedService, isSingleKind, selectionErrors } from './quote-packages.service';
 
 /** The option's summary: the report's verdict and deciding message, in package words. */
 export function optionSummary(report: FitReport): string {
