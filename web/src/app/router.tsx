@@ -50,6 +50,19 @@ export function createAppRouter(queryClient: QueryClient) {
     path: '*',
     lazy: lazy(() => import('./routes/not-found')),
   });
+  /**
+   * The planner's steps, one address each so the browser's Back button works; each step is its
+   * own chunk, so opening the planner loads only the first.
+   */
+  const plannerSteps = (): RouteObject[] => [
+    { index: true, lazy: lazy(() => import('./routes/planner/start')) },
+    { path: 'vehicle', lazy: lazy(() => import('./routes/planner/vehicle')) },
+    { path: 'use', lazy: lazy(() => import('./routes/planner/use')) },
+    { path: 'lift', lazy: lazy(() => import('./routes/planner/lift')) },
+    { path: 'wheels', lazy: lazy(() => import('./routes/planner/wheels')) },
+    { path: 'add-ons', lazy: lazy(() => import('./routes/planner/add-ons')) },
+    { path: 'review', lazy: lazy(() => import('./routes/planner/review')) },
+  ];
 
   return createBrowserRouter([
     {
@@ -61,7 +74,11 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: lazy(() => import('./routes/public/layout')),
           children: areaPages([
             { index: true, lazy: lazy(() => import('./routes/public/home')) },
-            { path: paths.plan.path, lazy: lazy(() => import('./routes/public/plan')) },
+            {
+              path: paths.plan.path,
+              lazy: lazy(() => import('./routes/public/plan/layout')),
+              children: plannerSteps(),
+            },
             { path: paths.auth.signIn.path, lazy: lazy(() => import('./routes/public/sign-in')) },
             {
               path: paths.auth.register.path,
@@ -83,6 +100,11 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: lazy(() => import('./routes/account/layout')),
           children: areaPages([
             { index: true, lazy: lazy(() => import('./routes/account/home')) },
+            {
+              path: paths.account.quotes.path,
+              lazy: lazy(() => import('./routes/account/quotes')),
+            },
+            { path: paths.account.quote.path, lazy: lazy(() => import('./routes/account/quote')) },
             notFound(),
           ]),
         },
@@ -91,6 +113,19 @@ export function createAppRouter(queryClient: QueryClient) {
           lazy: lazy(() => import('./routes/desk/layout')),
           children: areaPages([
             { index: true, lazy: lazy(() => import('./routes/desk/home')) },
+            {
+              path: paths.desk.walkIn.path,
+              lazy: lazy(() => import('./routes/desk/walk-in/layout')),
+              children: [
+                { path: 'customer', lazy: lazy(() => import('./routes/desk/walk-in/customer')) },
+                {
+                  lazy: lazy(() => import('./routes/desk/walk-in/steps-frame')),
+                  children: plannerSteps(),
+                },
+              ],
+            },
+            { path: paths.desk.quotes.path, lazy: lazy(() => import('./routes/desk/quotes')) },
+            { path: paths.desk.quote.path, lazy: lazy(() => import('./routes/desk/quote')) },
             notFound(),
           ]),
         },
@@ -117,6 +152,10 @@ export function createAppRouter(queryClient: QueryClient) {
               lazy: lazy(() => import('./routes/manage/vehicles')),
             },
             { path: paths.manage.rules.path, lazy: lazy(() => import('./routes/manage/rules')) },
+            {
+              path: paths.manage.policies.path,
+              lazy: lazy(() => import('./routes/manage/policies')),
+            },
             notFound(),
           ]),
         },

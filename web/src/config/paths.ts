@@ -9,7 +9,12 @@ function withQuery(path: string, query: Record<string, string | null | undefined
 
 export const paths = {
   home: { path: '/', getHref: () => '/' },
-  plan: { path: '/plan', getHref: () => '/plan' },
+  plan: {
+    path: '/plan',
+    getHref: () => '/plan',
+    /** One planner step: "/plan/wheels". */
+    step: (step: string) => `/plan/${step}`,
+  },
   auth: {
     signIn: {
       path: '/sign-in',
@@ -27,9 +32,28 @@ export const paths = {
   },
   account: {
     home: { path: '/account', getHref: () => '/account' },
+    quotes: { path: '/account/quotes', getHref: () => '/account/quotes' },
+    quote: {
+      path: '/account/quotes/:quoteId',
+      getHref: (quoteId: string) => `/account/quotes/${encodeURIComponent(quoteId)}`,
+    },
   },
   desk: {
     home: { path: '/desk', getHref: () => '/desk' },
+    walkIn: {
+      path: '/desk/walk-in',
+      getHref: () => '/desk/walk-in',
+      /** One step of the walk-in quote: "/desk/walk-in/customer", "/desk/walk-in/wheels". */
+      step: (step: string) => `/desk/walk-in/${step}`,
+    },
+    quotes: {
+      path: '/desk/quotes',
+      getHref: (q?: string | null) => withQuery('/desk/quotes', { q }),
+    },
+    quote: {
+      path: '/desk/quotes/:quoteId',
+      getHref: (quoteId: string) => `/desk/quotes/${encodeURIComponent(quoteId)}`,
+    },
   },
   workshop: {
     home: { path: '/workshop', getHref: () => '/workshop' },
@@ -37,6 +61,7 @@ export const paths = {
   manage: {
     home: { path: '/manage', getHref: () => '/manage' },
     staff: { path: '/manage/staff', getHref: () => '/manage/staff' },
+    policies: { path: '/manage/policies', getHref: () => '/manage/policies' },
     catalogue: { path: '/manage/catalogue', getHref: () => '/manage/catalogue' },
     vehicles: { path: '/manage/vehicles', getHref: () => '/manage/vehicles' },
     rules: {

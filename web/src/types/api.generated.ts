@@ -433,6 +433,249 @@ export interface paths {
     patch: operations['RuleSetsController_update'];
     trace?: never;
   };
+  '/api/workshop': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The workshop's card: name, address, phone, e-mail, time zone */
+    get: operations['WorkshopController_card'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/policies': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The pricing policy: labour rate, GST, charges, bundle discount, deposit */
+    get: operations['WorkshopController_policy'];
+    /** Replace the pricing policy (saved quotes keep the prices they were given) */
+    put: operations['WorkshopController_updatePolicy'];
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/quotes/preview': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Price and fit-check a package as it would be saved now (writes nothing) */
+    post: operations['QuotesController_preview'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/quotes': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** Quotes, newest first (a customer's own; every quote for the desk), at most 200 */
+    get: operations['QuotesController_list'];
+    put?: never;
+    /** Save the package as a quote (version 1: sent when the customer saves it, a draft when the desk does) */
+    post: operations['QuotesController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/quotes/{id}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** One quote with every version (another customer's is 404) */
+    get: operations['QuotesController_get'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/quotes/{id}/versions/{n}/pdf': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The quote version as a PDF */
+    get: operations['QuotesController_pdf'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/quotes/{id}/versions/{n}/accept': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Accept the latest sent version of my quote */
+    post: operations['QuotesController_accept'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/quotes/{id}/versions/{n}/decline': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Decline the latest sent version of my quote */
+    post: operations['QuotesController_decline'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/quotes/{id}/versions/{n}/send': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Send a draft version to the customer */
+    post: operations['QuotesController_send'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/planner/options': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** The products of one kind made for the vehicle, each checked in the current package (best verdict first, then price) */
+    post: operations['PlannerController_options'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/uploads': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The caller's own photos, newest first (at most 200) */
+    get: operations['UploadsController_list'];
+    put?: never;
+    /** Upload a photo (vehicle or tyre placard): checked by its content, stored re-encoded without metadata, with a thumbnail */
+    post: operations['UploadsController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/uploads/{id}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The photo, for its owner or staff (another customer's photo is 404) */
+    get: operations['UploadsController_original'];
+    put?: never;
+    post?: never;
+    /** Remove one of my photos that is not on a quote (files removed) */
+    delete: operations['UploadsController_remove'];
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/uploads/{id}/thumbnail': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** The photo's WebP thumbnail (at most 320 px), for its owner or staff */
+    get: operations['UploadsController_thumbnail'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/customers': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** Find customers by name or e-mail (any case), at most 50, by name */
+    get: operations['CustomersController_search'];
+    put?: never;
+    /** Create a customer for a walk-in quote; they get an e-mail with a link to choose a password */
+    post: operations['CustomersController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
 }
 export type webhooks = Record<string, never>;
 export interface components {
@@ -1385,6 +1628,535 @@ export interface components {
       limits: {
         [key: string]: components['schemas']['RuleLimitPatch'];
       };
+    };
+    WorkshopCardResponse: {
+      /** @example Kestrelmere 4x4 & Tyre */
+      name: string;
+      /** @example 7 Quarry Flat Road */
+      addressLine: string;
+      /** @example Tallowgate */
+      town: string;
+      /** @example 0491 570 006 */
+      phone: string;
+      /** @example bookings@kestrelmere.example */
+      email: string;
+      /**
+       * @description IANA time zone of the workshop
+       * @example Australia/Sydney
+       */
+      timeZone: string;
+      /**
+       * @description ISO 4217 currency code
+       * @example AUD
+       */
+      currency: string;
+    };
+    /** @enum {string} */
+    TaxRoundingMethod: 'per-invoice' | 'per-line';
+    BundleDiscountPolicyResponse: {
+      enabled: boolean;
+      /**
+       * @description Percent of the parts total, at most two decimals
+       * @example 5
+       */
+      percent: number;
+      /**
+       * @description The package must hold a line of each of these kinds
+       * @example [
+       *       "suspension-kit",
+       *       "wheel",
+       *       "tyre"
+       *     ]
+       */
+      requiresKinds: components['schemas']['ProductKind'][];
+    };
+    DepositPolicyResponse: {
+      /**
+       * @description Percent of the total, at most two decimals
+       * @example 20
+       */
+      percent: number;
+      /**
+       * @description Integer cents: the deposit is at least this
+       * @example 10000
+       */
+      floorCents: number;
+      /**
+       * @description Integer cents: the deposit is at most this
+       * @example 100000
+       */
+      capCents: number;
+      /**
+       * @description Percent used when a part must be ordered in
+       * @example 50
+       */
+      specialOrderPercent: number;
+    };
+    PolicyResponse: {
+      /** @example 14000 */
+      labourRateCentsPerHour: number;
+      /** @description True: catalogue prices, the labour rate and the charges below include GST */
+      pricesIncludeTax: boolean;
+      /**
+       * @description Percent, at most two decimals
+       * @example 10
+       */
+      taxRatePercent: number;
+      taxRoundingMethod: components['schemas']['TaxRoundingMethod'];
+      /** @example 3500 */
+      fittingBalancingCentsPerWheel: number;
+      /** @example 650 */
+      tyreDisposalCentsPerTyre: number;
+      bundleDiscount: components['schemas']['BundleDiscountPolicyResponse'];
+      deposit: components['schemas']['DepositPolicyResponse'];
+      /**
+       * @description Days a quote holds its prices
+       * @example 30
+       */
+      quoteValidDays: number;
+      /** Format: date-time */
+      updatedAt: string;
+    };
+    BundleDiscountPolicyDto: {
+      enabled: boolean;
+      /** @example 5 */
+      percent: number;
+      requiresKinds: components['schemas']['ProductKind'][];
+    };
+    DepositPolicyDto: {
+      /** @example 20 */
+      percent: number;
+      /** @example 10000 */
+      floorCents: number;
+      /**
+       * @description Not below floorCents
+       * @example 100000
+       */
+      capCents: number;
+      /**
+       * @description Not below percent
+       * @example 50
+       */
+      specialOrderPercent: number;
+    };
+    UpdatePolicyDto: {
+      /** @example 14000 */
+      labourRateCentsPerHour: number;
+      pricesIncludeTax: boolean;
+      /** @example 10 */
+      taxRatePercent: number;
+      taxRoundingMethod: components['schemas']['TaxRoundingMethod'];
+      /** @example 3500 */
+      fittingBalancingCentsPerWheel: number;
+      /** @example 650 */
+      tyreDisposalCentsPerTyre: number;
+      bundleDiscount: components['schemas']['BundleDiscountPolicyDto'];
+      deposit: components['schemas']['DepositPolicyDto'];
+      /** @example 30 */
+      quoteValidDays: number;
+    };
+    /** @enum {string} */
+    VehicleUse: 'daily' | 'touring' | 'towing' | 'off-road';
+    QuoteItemDto: {
+      /** Format: uuid */
+      productId: string;
+      /** @example 4 */
+      quantity: number;
+    };
+    QuotePackageDto: {
+      /** Format: uuid */
+      vehicleModelId: string;
+      /**
+       * Format: uuid
+       * @description The customer's own vehicle (theirs, and of this model)
+       */
+      customerVehicleId?: string;
+      /**
+       * @description Within the model's years
+       * @example 2019
+       */
+      vehicleYear?: number;
+      uses: components['schemas']['VehicleUse'][];
+      /**
+       * @description Permanent extra load, kg (drawers, canopy, water, tools)
+       * @default 0
+       */
+      constantLoadKg: number;
+      /** @description At most one wheel, one tyre and one suspension kit, plus components and services; each product once. Fitting, balancing and tyre disposal are charged by the policy, not sent as items. */
+      items: components['schemas']['QuoteItemDto'][];
+    };
+    /** @enum {string} */
+    PricedLineKind:
+      'part' | 'service' | 'labour' | 'fitting-balancing' | 'tyre-disposal' | 'bundle-discount';
+    /**
+     * @description part
+     * @enum {string}
+     */
+    PartKind: 'wheel' | 'tyre' | 'suspension-kit' | 'component';
+    PricedLineResponse: {
+      kind: components['schemas']['PricedLineKind'];
+      /** @example Bramblerock Strata 50 mm lift kit, medium load (150–300 kg) */
+      description: string;
+      /**
+       * @description Integer cents; negative only for the discount
+       * @example 174500
+       */
+      amountCents: number;
+      /** @description This line's GST with per-line rounding; null with per-invoice rounding */
+      taxCents: number | null;
+      /** @description part */
+      productKind?: components['schemas']['PartKind'];
+      /**
+       * Format: uuid
+       * @description part, service, labour
+       */
+      productId?: string;
+      /** @description part, service, labour */
+      sku?: string;
+      /** @description part, service (units charged), fitting-balancing (wheels), tyre-disposal (tyres) */
+      quantity?: number;
+      /** @description part, service, fitting-balancing, tyre-disposal */
+      unitPriceCents?: number;
+      /** @description part: must be ordered in */
+      specialOrder?: boolean;
+      /** @description part */
+      leadDays?: number;
+      /** @description service: charged per wheel fitted */
+      perWheel?: boolean;
+      /** @description service: bay time included in its price */
+      bayMinutes?: number;
+      /** @description service, labour */
+      bayKind?: components['schemas']['BayKind'] | null;
+      /** @description labour: quantity × minutes per unit */
+      labourMinutes?: number;
+      /** @description labour */
+      labourRateCentsPerHour?: number;
+      /** @description bundle-discount */
+      percent?: number;
+      /** @description bundle-discount: the parts total it was taken of */
+      discountedCents?: number;
+    };
+    PriceBreakdownResponse: {
+      partsCents: number;
+      servicesCents: number;
+      labourCents: number;
+      fittingBalancingCents: number;
+      tyreDisposalCents: number;
+      /** @description Zero or negative */
+      bundleDiscountCents: number;
+    };
+    /** @enum {string} */
+    DepositBasis: 'percentage' | 'floor' | 'cap' | 'total';
+    DepositOutcomeResponse: {
+      depositCents: number;
+      /** @example 20 */
+      percentApplied: number;
+      /** @description The percentage of the total before the floor and cap */
+      percentageCents: number;
+      basis: components['schemas']['DepositBasis'];
+      specialOrder: boolean;
+      specialOrderSkus: string[];
+    };
+    PackagePriceResponse: {
+      lines: components['schemas']['PricedLineResponse'][];
+      breakdown: components['schemas']['PriceBreakdownResponse'];
+      subtotalCents: number;
+      /** @description GST: included in the total when prices include tax */
+      taxCents: number;
+      totalCents: number;
+      totalExcludingTaxCents: number;
+      pricesIncludeTax: boolean;
+      /** @example 10 */
+      taxRatePercent: number;
+      taxRoundingMethod: components['schemas']['TaxRoundingMethod'];
+      bundleDiscountApplied: boolean;
+      deposit: components['schemas']['DepositOutcomeResponse'];
+      depositCents: number;
+      balanceDueCents: number;
+      quoteValidDays: number;
+      /** @description The rounding and tax method in words */
+      roundingNote: string;
+    };
+    QuoteVehicleNameResponse: {
+      /** Format: uuid */
+      vehicleModelId: string;
+      /** @example Vantrel Strata SR dual cab */
+      name: string;
+    };
+    QuotePreviewResponse: {
+      price: components['schemas']['PackagePriceResponse'];
+      fitReport: components['schemas']['FitReportResponse'];
+      /** @description max(quantity of the wheel line, quantity of the tyre line) */
+      wheelsFitted: number;
+      /** @description Quantity of the tyre line */
+      tyresReplaced: number;
+      /**
+       * @description The last day the prices would hold if saved now (workshop time zone)
+       * @example 2026-12-31
+       */
+      validUntilDate: string;
+      vehicle: components['schemas']['QuoteVehicleNameResponse'];
+    };
+    CreateQuoteDto: {
+      /** Format: uuid */
+      vehicleModelId: string;
+      /**
+       * Format: uuid
+       * @description The customer's own vehicle (theirs, and of this model)
+       */
+      customerVehicleId?: string;
+      /**
+       * @description Within the model's years
+       * @example 2019
+       */
+      vehicleYear?: number;
+      uses: components['schemas']['VehicleUse'][];
+      /**
+       * @description Permanent extra load, kg (drawers, canopy, water, tools)
+       * @default 0
+       */
+      constantLoadKg: number;
+      /** @description At most one wheel, one tyre and one suspension kit, plus components and services; each product once. Fitting, balancing and tyre disposal are charged by the policy, not sent as items. */
+      items: components['schemas']['QuoteItemDto'][];
+      /** @description Photos the quote's customer uploaded and has not attached to a quote yet */
+      photoIds?: string[];
+      /**
+       * Format: uuid
+       * @description Desk and manager only, and required for them: the customer the walk-in quote is for
+       */
+      customerId?: string;
+    };
+    QuoteCustomerResponse: {
+      /** Format: uuid */
+      id: string;
+      name: string;
+      email: string;
+    };
+    QuoteCustomerVehicleResponse: {
+      /** Format: uuid */
+      id: string;
+      nickname: string | null;
+      rego: string | null;
+    };
+    QuoteVehicleResponse: {
+      /** Format: uuid */
+      vehicleModelId: string;
+      /** @example Vantrel Strata SR dual cab */
+      name: string;
+      year: number | null;
+      customerVehicle: components['schemas']['QuoteCustomerVehicleResponse'] | null;
+    };
+    /** @enum {string} */
+    UploadKind: 'vehicle' | 'tyre-placard';
+    QuotePhotoResponse: {
+      /** Format: uuid */
+      id: string;
+      kind: components['schemas']['UploadKind'];
+      widthPx: number;
+      heightPx: number;
+      /** @example /api/uploads/4f0c… */
+      url: string;
+      /** @example /api/uploads/4f0c…/thumbnail */
+      thumbnailUrl: string;
+    };
+    /**
+     * @description Effective state: a draft or sent version past validUntil reads expired
+     * @enum {string}
+     */
+    QuoteVersionState: 'draft' | 'sent' | 'accepted' | 'superseded' | 'expired' | 'declined';
+    QuoteVersionAuthorResponse: {
+      name: string;
+      role: components['schemas']['Role'];
+    };
+    QuoteLineResponse: {
+      /** @example 1 */
+      position: number;
+      /**
+       * Format: uuid
+       * @description Null when the product was deleted since
+       */
+      productId: string | null;
+      sku: string;
+      name: string;
+      brand: string;
+      kind: components['schemas']['ProductKind'];
+      quantity: number;
+      /** @description Integer cents, on the policy tax basis at the time */
+      unitPriceCents: number;
+      labourMinutes: number;
+      bayKind: components['schemas']['BayKind'] | null;
+      leadDays: number;
+      stockQty: number;
+      perWheel: boolean;
+    };
+    QuoteVersionResponse: {
+      /** Format: uuid */
+      id: string;
+      /** @example 1 */
+      number: number;
+      /** @description Effective state: a draft or sent version past validUntil reads expired */
+      state: components['schemas']['QuoteVersionState'];
+      /** Format: date-time */
+      stateChangedAt: string;
+      revisionReason: string | null;
+      /** Format: date-time */
+      createdAt: string;
+      createdBy: components['schemas']['QuoteVersionAuthorResponse'];
+      /**
+       * @description Last day the prices hold (workshop time zone)
+       * @example 2026-12-31
+       */
+      validUntilDate: string;
+      /**
+       * Format: date-time
+       * @description The end of that day (UTC)
+       */
+      validUntil: string;
+      wheelsFitted: number;
+      tyresReplaced: number;
+      lines: components['schemas']['QuoteLineResponse'][];
+      price: components['schemas']['PackagePriceResponse'];
+      fitReport: components['schemas']['FitReportResponse'];
+      /** @description The latest version, sent or accepted, and not past validUntil */
+      bookable: boolean;
+      /** @example /api/quotes/4f0c…/versions/1/pdf */
+      pdfUrl: string;
+    };
+    QuoteResponse: {
+      /** Format: uuid */
+      id: string;
+      /** @example 123 */
+      number: number;
+      /** @example Q-000123 */
+      reference: string;
+      customer: components['schemas']['QuoteCustomerResponse'];
+      vehicle: components['schemas']['QuoteVehicleResponse'];
+      uses: components['schemas']['VehicleUse'][];
+      constantLoadKg: number;
+      /** Format: date-time */
+      createdAt: string;
+      photos: components['schemas']['QuotePhotoResponse'][];
+      /** @description Oldest first */
+      versions: components['schemas']['QuoteVersionResponse'][];
+    };
+    QuoteSummaryVersionResponse: {
+      number: number;
+      state: components['schemas']['QuoteVersionState'];
+      totalCents: number;
+      depositCents: number;
+      /** @example 2026-12-31 */
+      validUntilDate: string;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    QuoteSummaryResponse: {
+      /** Format: uuid */
+      id: string;
+      number: number;
+      /** @example Q-000123 */
+      reference: string;
+      customer: components['schemas']['QuoteCustomerResponse'];
+      /** @example Vantrel Strata SR dual cab */
+      vehicleName: string;
+      latestVersion: components['schemas']['QuoteSummaryVersionResponse'];
+      versionCount: number;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    QuoteListResponse: {
+      /** @description Newest first, at most 200 */
+      items: components['schemas']['QuoteSummaryResponse'][];
+    };
+    PlannerOptionsDto: {
+      /** Format: uuid */
+      vehicleModelId: string;
+      /** @default 0 */
+      constantLoadKg: number;
+      /** @description The current selection (may be empty) */
+      items: components['schemas']['QuoteItemDto'][];
+      /** @description The kind to choose */
+      kind: components['schemas']['ProductKind'];
+    };
+    PlannerOptionMetricsResponse: {
+      /** @example 802.8 */
+      newDiameterMm: number | null;
+      /** @example 3.4 */
+      diameterChangePercent: number | null;
+      /**
+       * @description What the speedometer reads at a true 100 km/h
+       * @example 96.7
+       */
+      speedometerAtTrue100Kmh: number | null;
+      /** @example 63.3 */
+      combinedLiftMm: number;
+      /** @example 20 */
+      trackChangeMm: number;
+    };
+    PlannerOptionResponse: {
+      product: components['schemas']['ProductResponse'];
+      verdict: components['schemas']['FitVerdict'];
+      /** @example Fits with the rest of the package. */
+      summary: string;
+      metrics: components['schemas']['PlannerOptionMetricsResponse'];
+      /** @description Roles of the current package's suggested additions this product fills */
+      suggestedBy: components['schemas']['AdditionRole'][];
+    };
+    PlannerOptionsResponse: {
+      /** @description Best verdict first, then price */
+      items: components['schemas']['PlannerOptionResponse'][];
+      /** @description The current selection's suggested additions */
+      suggestedAdditions: components['schemas']['SuggestedAdditionResponse'][];
+    };
+    /**
+     * @description Read from the content
+     * @enum {string}
+     */
+    UploadImageFormat: 'jpeg' | 'png' | 'webp';
+    UploadResponse: {
+      /** Format: uuid */
+      id: string;
+      kind: components['schemas']['UploadKind'];
+      /** @description Read from the content */
+      format: components['schemas']['UploadImageFormat'];
+      /** @description Size of the stored (re-encoded) photo in bytes */
+      bytes: number;
+      widthPx: number;
+      heightPx: number;
+      /** @description The file name the browser sent, cleaned; for display only */
+      originalName: string;
+      /** Format: date-time */
+      createdAt: string;
+      /**
+       * Format: uuid
+       * @description The quote it is on (null until a quote is saved with it)
+       */
+      quoteId: string | null;
+      /** @example /api/uploads/00000000-0000-4000-8000-000000000000 */
+      url: string;
+      /** @example /api/uploads/00000000-0000-4000-8000-000000000000/thumbnail */
+      thumbnailUrl: string;
+    };
+    UploadListResponse: {
+      items: components['schemas']['UploadResponse'][];
+    };
+    CustomerResponse: {
+      /** Format: uuid */
+      id: string;
+      /** @example Ari Pellow */
+      name: string;
+      /** @example ari.pellow@tallowgate.example */
+      email: string;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    CustomerListResponse: {
+      items: components['schemas']['CustomerResponse'][];
+    };
+    CreateCustomerDto: {
+      /** @example Ari Pellow */
+      name: string;
+      /** @example customer@liftwright.example */
+      email: string;
     };
   };
   responses: never;
@@ -3007,6 +3779,912 @@ export interface operations {
         };
       };
       404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  WorkshopController_card: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WorkshopCardResponse'];
+        };
+      };
+    };
+  };
+  WorkshopController_policy: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['PolicyResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  WorkshopController_updatePolicy: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdatePolicyDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['PolicyResponse'];
+        };
+      };
+      /** @description fieldErrors such as "deposit.capCents"; nothing changed */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_preview: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['QuotePackageDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuotePreviewResponse'];
+        };
+      };
+      /** @description fieldErrors such as "items[2].productId" */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_list: {
+    parameters: {
+      query?: {
+        /** @description Desk and manager: one customer's quotes */
+        customerId?: string;
+        /** @description Quote number (123 or Q-000123), customer name or e-mail, or rego */
+        q?: string;
+      };
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuoteListResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateQuoteDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuoteResponse'];
+        };
+      };
+      /** @description fieldErrors; a package that does not fit is refused with fieldErrors.items */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuoteResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_pdf: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+        /** @description Version number */
+        n: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/pdf': string;
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/pdf': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/pdf': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/pdf': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_accept: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+        /** @description Version number */
+        n: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuoteResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Expired, superseded, declined, already accepted or not the latest */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_decline: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+        /** @description Version number */
+        n: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuoteResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_send: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+        /** @description Version number */
+        n: number;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuoteResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not a draft, expired or not the latest */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  PlannerController_options: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['PlannerOptionsDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['PlannerOptionsResponse'];
+        };
+      };
+      /** @description fieldErrors such as "items[2].productId" */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  UploadsController_list: {
+    parameters: {
+      query?: {
+        /** @description Only the photos on this quote */
+        quoteId?: string;
+      };
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['UploadListResponse'];
+        };
+      };
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  UploadsController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'multipart/form-data': {
+          /**
+           * Format: binary
+           * @description A JPEG, PNG or WebP photo, at most 10 MB and 40 megapixels
+           */
+          photo: string;
+          /** @enum {string} */
+          kind: 'vehicle' | 'tyre-placard';
+        };
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['UploadResponse'];
+        };
+      };
+      /** @description No photo, not a JPEG/PNG/WebP image by content, too many pixels, a bad kind, or 20 photos already waiting for a quote */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Over 10 MB; nothing stored */
+      413: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  UploadsController_original: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description The stored photo in its own format */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'image/jpeg': string;
+          'image/png': string;
+          'image/webp': string;
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  UploadsController_remove: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description Removed */
+      204: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content?: never;
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not one of my photos */
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description The photo is on a saved quote */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  UploadsController_thumbnail: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      /** @description WebP thumbnail */
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'image/webp': string;
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  CustomersController_search: {
+    parameters: {
+      query?: {
+        /** @description Words each found in the name or e-mail address (any case); without it, the first customers by name */
+        q?: string;
+      };
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['CustomerListResponse'];
+        };
+      };
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  CustomersController_create: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateCustomerDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['CustomerResponse'];
+        };
+      };
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description E-mail already registered */
+      409: {
         headers: {
           [name: string]: unknown;
         };

@@ -107,3 +107,63 @@ export type RuleSet = Schemas['RuleSetResponse'];
 export type RuleSetListResponse = Schemas['RuleSetListResponse'];
 export type RuleLimitChange = Schemas['RuleLimitPatch'];
 export type UpdateRuleSetRequest = Schemas['UpdateRuleSetDto'];
+
+// ---- Vehicle makes and the customer's own vehicles ----------------------------------------
+export type VehicleMakesResponse = Schemas['VehicleMakesResponse'];
+export type CustomerVehicle = Schemas['CustomerVehicleResponse'];
+export type CustomerVehicleListResponse = Schemas['CustomerVehicleListResponse'];
+
+// ---- Fit report ----------------------------------------------------------------------------
+export type FitReport = Schemas['FitReportResponse'];
+export type FitCheck = Schemas['FitCheckResponse'];
+export type FitCheckCode = Schemas['FitCheckCode'];
+export type SkippedCheck = Schemas['SkippedCheckResponse'];
+export type FitMetrics = Schemas['FitMetricsResponse'];
+export type AdditionRole = Schemas['AdditionRole'];
+export type SuggestedAddition = Schemas['SuggestedAdditionResponse'];
+export type Caution = Schemas['CautionResponse'];
+
+// ---- Workshop and policies ---------------------------------------------------------------
+export type WorkshopCard = Schemas['WorkshopCardResponse'];
+export type TaxRoundingMethod = Schemas['TaxRoundingMethod'];
+export type Policy = Schemas['PolicyResponse'];
+export type UpdatePolicyRequest = Schemas['UpdatePolicyDto'];
+
+// ---- Planner and quotes --------------------------------------------------------------------
+export type VehicleUse = Schemas['VehicleUse'];
+export type QuotePackageItem = Schemas['QuoteItemDto'];
+export type QuotePackageRequest = Schemas['QuotePackageDto'];
+export type PlannerOptionsRequest = Schemas['PlannerOptionsDto'];
+export type PlannerOptionMetrics = Schemas['PlannerOptionMetricsResponse'];
+export type PlannerOption = Schemas['PlannerOptionResponse'];
+export type PlannerOptionsResponse = Schemas['PlannerOptionsResponse'];
+export type PricedLineKind = Schemas['PricedLineKind'];
+/** One priced line; the fields after `taxCents` depend on the kind. */
+export type PricedLine = Schemas['PricedLineResponse'];
+export type PackagePrice = Schemas['PackagePriceResponse'];
+export type QuotePreview = Schemas['QuotePreviewResponse'];
+export type CreateQuoteRequest = Schemas['CreateQuoteDto'];
+export type QuoteVersionState = Schemas['QuoteVersionState'];
+export type QuoteCustomer = Schemas['QuoteCustomerResponse'];
+export type QuoteSummary = Schemas['QuoteSummaryResponse'];
+export type QuoteListResponse = Schemas['QuoteListResponse'];
+export type QuoteLine = Schemas['QuoteLineResponse'];
+export type QuotePhoto = Schemas['QuotePhotoResponse'];
+export type QuoteVersion = Schemas['QuoteVersionResponse'];
+export type Quote = Schemas['QuoteResponse'];
+
+/** GET /api/quotes query string (staff). */
+export interface QuoteQuery {
+  customerId?: string;
+  q?: string;
+}
+
+// ---- Photos --------------------------------------------------------------------------------
+export type UploadKind = Schemas['UploadKind'];
+export type Upload = Schemas['UploadResponse'];
+export type UploadListResponse = Schemas['UploadListResponse'];
+
+// ---- Customers (front desk) ----------------------------------------------------------------
+export type Customer = Schemas['CustomerResponse'];
+export type CustomerListResponse = Schemas['CustomerListResponse'];
+export type CreateCustomerRequest = Schemas['CreateCustomerDto'];

@@ -4,6 +4,9 @@ import EventNoteOutlined from '@mui/icons-material/EventNoteOutlined';
 import GarageOutlined from '@mui/icons-material/GarageOutlined';
 import RuleOutlined from '@mui/icons-material/RuleOutlined';
 import HandymanOutlined from '@mui/icons-material/HandymanOutlined';
+import PercentOutlined from '@mui/icons-material/PercentOutlined';
+import PersonAddAltOutlined from '@mui/icons-material/PersonAddAltOutlined';
+import RequestQuoteOutlined from '@mui/icons-material/RequestQuoteOutlined';
 import Inventory2Outlined from '@mui/icons-material/Inventory2Outlined';
 import TuneOutlined from '@mui/icons-material/TuneOutlined';
 import { paths } from '@/config/paths';
@@ -18,14 +21,34 @@ import type { NavItem } from './nav-item';
 export function navItemsForRole(role: Role): NavItem[] {
   const items: NavItem[] = [];
   if (canUseArea(role, 'account')) {
-    items.push({
-      label: 'Your garage',
-      to: paths.account.home.getHref(),
-      icon: <GarageOutlined />,
-    });
+    items.push(
+      {
+        label: 'Your garage',
+        to: paths.account.home.getHref(),
+        icon: <GarageOutlined />,
+        end: true,
+      },
+      {
+        label: 'My quotes',
+        to: paths.account.quotes.getHref(),
+        icon: <RequestQuoteOutlined />,
+      },
+    );
   }
+  const deskWork: NavItem[] = [
+    { label: 'Walk-in quote', to: paths.desk.walkIn.getHref(), icon: <PersonAddAltOutlined /> },
+    { label: 'Quotes', to: paths.desk.quotes.getHref(), icon: <RequestQuoteOutlined /> },
+  ];
   if (canUseArea(role, 'desk')) {
-    items.push({ label: 'Front desk', to: paths.desk.home.getHref(), icon: <EventNoteOutlined /> });
+    items.push({
+      label: 'Front desk',
+      to: paths.desk.home.getHref(),
+      icon: <EventNoteOutlined />,
+      end: true,
+    });
+    // The front desk's own work follows its home; a manager finds it after the Manage pages,
+    // so the manager's phone bar keeps Manage, Catalogue and Vehicles in reach.
+    if (!canUseArea(role, 'manage')) items.push(...deskWork);
   }
   if (canUseArea(role, 'workshop')) {
     items.push({
@@ -48,7 +71,9 @@ export function navItemsForRole(role: Role): NavItem[] {
         icon: <DirectionsCarOutlined />,
       },
       { label: 'Rules', to: paths.manage.rules.getHref(), icon: <RuleOutlined /> },
+      { label: 'Policies', to: paths.manage.policies.getHref(), icon: <PercentOutlined /> },
       { label: 'Staff', to: paths.manage.staff.getHref(), icon: <BadgeOutlined /> },
+      ...deskWork,
     );
   }
   return items;

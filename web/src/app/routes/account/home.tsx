@@ -1,3 +1,4 @@
+import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import { Link as RouterLink } from 'react-router';
 import { LandingCard } from '@/components/ui/landing-card';
@@ -10,20 +11,35 @@ export default function AccountHomeRoute() {
   return (
     <>
       <PageHeader title="Your garage" lead={user ? `Signed in as ${user.name}.` : undefined} />
-      <LandingCard
-        title="Nothing saved yet"
-        status="Your vehicles, quotes and bookings will appear here."
-        upcoming={[
-          'Keep your vehicles, with photos',
-          'Save quotes and compare a revised quote with the one before',
-          'Follow your bookings, and ask to move or cancel one',
-        ]}
-        actions={
-          <Button component={RouterLink} to={paths.plan.getHref()} variant="contained">
-            Start planning
-          </Button>
-        }
-      />
+      <Box sx={{ display: 'grid', gap: 3 }}>
+        <LandingCard
+          title="My quotes"
+          status="The quotes you have saved, each with its versions, the fit report and a PDF. Accept a quote when it suits you."
+          actions={
+            <>
+              <Button
+                component={RouterLink}
+                to={paths.account.quotes.getHref()}
+                variant="contained"
+              >
+                Open my quotes
+              </Button>
+              <Button component={RouterLink} to={paths.plan.getHref()} variant="outlined">
+                Start planning
+              </Button>
+            </>
+          }
+        />
+        <LandingCard
+          title="Still to come"
+          status="Your vehicles and bookings will appear here."
+          upcoming={[
+            'Keep your vehicles, with photos',
+            'Hold a workshop slot and pay the deposit',
+            'Follow your bookings, and ask to move or cancel one',
+          ]}
+        />
+      </Box>
     </>
   );
 }

@@ -51,6 +51,15 @@ export default function ManageHomeRoute() {
           }
         />
         <LandingCard
+          title="Pricing policies"
+          status="Labour rate, GST and its rounding, fitting and disposal fees, the package discount, the deposit and how long quotes hold."
+          actions={
+            <Button component={RouterLink} to={paths.manage.policies.getHref()} variant="outlined">
+              Open the policies
+            </Button>
+          }
+        />
+        <LandingCard
           title="Staff accounts"
           status="Add front desk, technician and manager accounts, change a role, or switch an account off."
           actions={
@@ -62,11 +71,7 @@ export default function ManageHomeRoute() {
         <LandingCard
           title="Workshop set-up"
           status="These parts of Manage are still to be built."
-          upcoming={[
-            'Bays, opening hours, closures and public holidays',
-            'Labour rate, tax and deposit policy',
-            'Reports',
-          ]}
+          upcoming={['Bays, opening hours, closures and public holidays', 'Reports']}
         />
       </Box>
     </>
