@@ -585,6 +585,42 @@ describe('quotes: preview, save, versions, PDF', () => {
         .expect(404);
     });
 
+    it('hands photos the desk took for a walk-in to the customer with the quote', async () => {
+      const deskUser = await testApp.db.query<{ id: string }>(
+        `select id from "user" where role = 'desk' and email = $1`,
+        ['desk@liftwright.example'],
+      );
+      const deskPhoto = await insertUpload(deskUser.rows[0].id);
+      const strangerPhoto = await insertUpload(customerId);
+      const part = await makeProduct();
+      const refused = await desk.agent
+        .post('/api/quotes')
+        .set('x-csrf-token', desk.csrfToken)
+        .send({
+          ...packageFor([{ productId: part, quantity: 1 }]),
+          customerId: other.id,
+          photoIds: [deskPhoto, strangerPhoto],
+        })
+        .expect(400);
+      // A third customer's photo cannot be moved onto this customer's quote.
+      expect(refused.body.fieldErrors.photoIds[0]).toContain(strangerPhoto);
+      const saved = await desk.agent
+        .post('/api/quotes')
+        .set('x-csrf-token', desk.csrfToken)
+        .send({
+          ...packageFor([{ productId: part, quantity: 1 }]),
+          customerId: other.id,
+          photoIds: [deskPhoto],
+        })
+        .expect(201);
+      expect(saved.body.photos.map((photo: { id: string }) => photo.id)).toEqual([deskPhoto]);
+      const row = await testApp.db.query<{ owner_id: string; quote_id: string }>(
+        'select owner_id, quote_id from upload where id = $1',
+        [deskPhoto],
+      );
+      expect(row.rows[0]).toEqual({ owner_id: other.id, quote_id: saved.body.id });
+    });
+
     it('attaches the customer’s own unattached photos', async () => {
       const mine = await insertUpload(customerId);
       const theirs = await insertUpload(other.id);

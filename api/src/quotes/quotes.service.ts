@@ -114,13 +114,18 @@ export class QuotesService {
       const photoIds = dto.photoIds ?? [];
       const photos =
         photoIds.length > 0
-          ? await em.find(Upload, { id: { $in: photoIds }, owner: customer, quote: null })
+          ? await em.find(Upload, {
+              id: { $in: photoIds },
+              // A walk-in's photos are taken by the desk: theirs or the customer's own.
+              owner: savedByCustomer ? customer : { $in: [customer, user] },
+              quote: null,
+            })
           : [];
       const missing = photoIds.filter((id) => !photos.some((photo) => photo.id === id));
       if (missing.length > 0) {
         throw new FieldErrorsException({
           photoIds: [
-            `${savedByCustomer ? 'you have' : 'the customer has'} no unattached photo with the id ${missing.join(', ')}`,
+            `${savedByCustomer ? 'you have no' : 'neither you nor the customer has an'} unattached photo with the id ${missing.join(', ')}`,
           ],
         });
       }
@@ -179,7 +184,11 @@ export class QuotesService {
             perWheel: priced.lines[index].perWheel === true,
           }),
       );
-      for (const photo of photos) photo.quote = quote;
+      for (const photo of photos) {
+        photo.quote = quote;
+        // The photos belong to the customer from now on (they see them with the quote).
+        photo.owner = customer;
+      }
       em.persist([quote, version, ...lines]);
       await em.flush();
       return quote.id;
