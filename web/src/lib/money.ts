@@ -19,9 +19,9 @@ const currencyFormat = new Intl.NumberFormat('en-AU', {
   currencyDisplay: 'narrowSymbol',
 });
 
-/** 124950 → "$1,249.50". */
+/** 124950 → "$1,249.50"; a discount of -26405 → "−$264.05" (a true minus sign, as elsewhere). */
 export function formatCents(cents: number): string {
-  return currencyFormat.format(cents / 100);
+  return currencyFormat.format(cents / 100).replace(/^-/, '\u2212');
 }
 
 /** 124950 → "1249.50", the form a price field shows and edits. */

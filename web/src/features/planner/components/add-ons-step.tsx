@@ -13,7 +13,8 @@ import { VerdictChip } from '@/components/quote/verdict-chip';
 import { formatCents } from '@/lib/money';
 import type { PlannerOption, ProductKind, SuggestedAddition } from '@/types/api';
 import { plannerOptionsQueryOptions } from '../api/get-planner-options';
-import { packageItems } from '../forms/build';
+import { quotePreviewQueryOptions } from '../api/preview-quote';
+import { packageItems, toPackage } from '../forms/build';
 import { serviceAttributes } from '../forms/product-text';
 import { usePlanner } from '../hooks/use-planner';
 import { ChoiceCard } from './choice-card';
@@ -81,11 +82,14 @@ function AddOnList({
   options,
   chosenIds,
   onToggle,
+  packageVerdict,
 }: {
   title: string;
   options: readonly PlannerOption[];
   chosenIds: ReadonlySet<string>;
   onToggle: (option: PlannerOption, checked: boolean) => void;
+  /** The verdict of the build as it stands: an add-on shows its own only when it differs. */
+  packageVerdict: PlannerOption['verdict'] | undefined;
 }) {
   const labelId = useId();
   if (options.length === 0) return null;
@@ -99,48 +103,51 @@ function AddOnList({
         aria-labelledby={labelId}
         sx={{ display: 'grid', gap: 1, gridTemplateColumns: 'minmax(0, 1fr)' }}
       >
-        {options.map((option) => (
-          <ChoiceCard
-            key={option.product.id}
-            type="checkbox"
-            name="add-ons"
-            value={option.product.id}
-            checked={chosenIds.has(option.product.id)}
-            onChange={(checked) => onToggle(option, checked)}
-            title={option.product.name}
-            badges={
-              option.suggestedBy.length > 0 || option.verdict !== 'ok' ? (
+        {options.map((option) => {
+          const ownVerdict = option.verdict !== 'ok' && option.verdict !== packageVerdict;
+          return (
+            <ChoiceCard
+              key={option.product.id}
+              type="checkbox"
+              name="add-ons"
+              value={option.product.id}
+              checked={chosenIds.has(option.product.id)}
+              onChange={(checked) => onToggle(option, checked)}
+              title={option.product.name}
+              badges={
+                option.suggestedBy.length > 0 || ownVerdict ? (
+                  <>
+                    {option.suggestedBy.map((role) => (
+                      <Chip
+                        key={role}
+                        size="small"
+                        color="primary"
+                        label={`Suggested: ${additionLabels[role].toLowerCase()}`}
+                        sx={{
+                          height: 'auto',
+                          maxWidth: '100%',
+                          '& .MuiChip-label': { whiteSpace: 'normal', py: 0.25 },
+                        }}
+                      />
+                    ))}
+                    {ownVerdict && <VerdictChip verdict={option.verdict} />}
+                  </>
+                ) : undefined
+              }
+              details={
                 <>
-                  {option.suggestedBy.map((role) => (
-                    <Chip
-                      key={role}
-                      size="small"
-                      color="primary"
-                      label={`Suggested: ${additionLabels[role].toLowerCase()}`}
-                      sx={{
-                        height: 'auto',
-                        maxWidth: '100%',
-                        '& .MuiChip-label': { whiteSpace: 'normal', py: 0.25 },
-                      }}
-                    />
-                  ))}
-                  {option.verdict !== 'ok' && <VerdictChip verdict={option.verdict} />}
+                  {option.product.description || option.product.brand}
+                  {ownVerdict && (
+                    <Box component="span" sx={{ display: 'block', mt: 0.5 }}>
+                      {option.summary}
+                    </Box>
+                  )}
                 </>
-              ) : undefined
-            }
-            details={
-              <>
-                {option.product.description || option.product.brand}
-                {option.verdict !== 'ok' && (
-                  <Box component="span" sx={{ display: 'block', mt: 0.5 }}>
-                    {option.summary}
-                  </Box>
-                )}
-              </>
-            }
-            aside={formatCents(option.product.priceCents)}
-          />
-        ))}
+              }
+              aside={formatCents(option.product.priceCents)}
+            />
+          );
+        })}
       </Box>
     </Box>
   );
@@ -151,6 +158,17 @@ export function AddOnsStep() {
   const { build, setAddOn, includeRequired, chooseSingle } = usePlanner();
   const components = usePackageOptions('component');
   const services = usePackageOptions('service');
+  // The build's own verdict (the review's preview, usually cached): an add-on's verdict is shown
+  // only where it differs, so a package that already needs a certificate does not read as if
+  // each add-on were the reason.
+  const body = toPackage(build);
+  const preview = useQuery({
+    ...quotePreviewQueryOptions(
+      body ?? { vehicleModelId: '', uses: [], constantLoadKg: 0, items: [] },
+    ),
+    enabled: body !== null,
+  });
+  const packageVerdict = preview.data?.fitReport.verdict;
   const suggestions = useMemo(
     () => components.data?.suggestedAdditions ?? services.data?.suggestedAdditions ?? [],
     [components.data, services.data],
@@ -310,12 +328,14 @@ export function AddOnsStep() {
             options={componentOptions.filter((option) => !requiredIds.has(option.product.id))}
             chosenIds={chosenIds}
             onToggle={(option, checked) => setAddOn(option, checked)}
+            packageVerdict={packageVerdict}
           />
           <AddOnList
             title="Workshop services"
             options={serviceOptions.filter((option) => !requiredIds.has(option.product.id))}
             chosenIds={chosenIds}
             onToggle={(option, checked) => setAddOn(option, checked)}
+            packageVerdict={packageVerdict}
           />
           <UnsuitableOptions options={unsuitable} title="Not suitable for this build" />
           <Typography variant="body2" color="text.secondary">
