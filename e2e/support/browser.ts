@@ -35,14 +35,23 @@ export async function newPage(
   return { context, page };
 }
 
-/** Saves a full-page screenshot under e2e/artifacts/<journey>/<name>-<viewport>.png. */
-export async function screenshot(page: Page, journey: string, name: string): Promise<string> {
+/**
+ * Saves a full-page screenshot under e2e/artifacts/<journey>/<name>-<viewport>.png. Pass
+ * `{ fullPage: false }` for what the screen shows, e.g. with a dialog open (a full-page capture
+ * stretches the viewport, and the dialog's fixed backdrop with it).
+ */
+export async function screenshot(
+  page: Page,
+  journey: string,
+  name: string,
+  options: { fullPage?: boolean } = {},
+): Promise<string> {
   const dir = join(artifactsDir, journey);
   mkdirSync(dir, { recursive: true });
   const size = page.viewportSize();
   const path = join(dir, `${name}-${size ? `${size.width}x${size.height}` : 'page'}.png`);
   // From the top, so that the fixed app bar sits where a person sees it.
   await page.evaluate(() => window.scrollTo(0, 0));
-  await page.screenshot({ path, fullPage: true });
+  await page.screenshot({ path, fullPage: options.fullPage ?? true });
   return path;
 }

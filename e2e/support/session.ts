@@ -32,3 +32,32 @@ export async function getJson<T>(page: Page, path: string): Promise<{ status: nu
     return { status: response.status, body: (text ? JSON.parse(text) : null) as T };
   }, path);
 }
+
+/**
+ * A JSON POST from inside the page, with the session's CSRF token (GET /api/auth/csrf), so it
+ * runs as the page's visitor. For reading what the API computes, not for driving the journey.
+ */
+export async function postJson<T>(
+  page: Page,
+  path: string,
+  body: unknown,
+): Promise<{ status: number; body: T }> {
+  return page.evaluate(
+    async ({ target, payload }) => {
+      const csrf = await fetch('/api/auth/csrf', { headers: { accept: 'application/json' } });
+      const { csrfToken } = (await csrf.json()) as { csrfToken: string };
+      const response = await fetch(target, {
+        method: 'POST',
+        headers: {
+          accept: 'application/json',
+          'content-type': 'application/json',
+          'x-csrf-token': csrfToken,
+        },
+        body: JSON.stringify(payload),
+      });
+      const text = await response.text();
+      return { status: response.status, body: (text ? JSON.parse(text) : null) as T };
+    },
+    { target: path, payload: body },
+  );
+}
