@@ -78,7 +78,7 @@ describe('migrations and seeder (against the migrated test database)', () => {
       DEMO_PRODUCTS.map((product) => product.sku),
     );
     expect(Object.fromEntries(counts.map((row) => [row.kind, Number(row.count)]))).toEqual({
-      component: 6,
+      component: 7,
       service: 5,
       'suspension-kit': 18,
       tyre: 15,

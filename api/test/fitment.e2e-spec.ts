@@ -156,6 +156,68 @@ describe('fit report through POST /api/fitment/check (seeded catalogue)', () => 
       });
       const withRings = await report(strata, ['IW-STK-1785-00', 'IW-HR-1101-1061']);
       expect(addition(withRings, 'hub-rings')).toBeUndefined();
+      expect(check(withRings, 'centre-bore')).toMatchObject({
+        verdict: 'advisory',
+        numbers: { ringOuterMm: 110.1, ringInnerMm: 106.1 },
+      });
+      expect(check(withRings, 'centre-bore').message).toContain(
+        'the hub-centric rings (110.1 → 106.1 mm) centre the wheel on the hub',
+      );
+    });
+
+    it('on a 108.1 mm hub: suggests 110.1 → 108.1 mm rings and refuses 110.1 → 106.1 mm ones', async () => {
+      const bare = await report(highrange, ['IW-STK-1785-00']);
+      expect(check(bare, 'centre-bore')).toMatchObject({
+        verdict: 'advisory',
+        numbers: { hubBoreMm: 108.1, wheelBoreMm: 110.1, differenceMm: 2 },
+      });
+      // Common practice (no published source): a hub-centric ring's outer side matches the
+      // wheel's bore and its inner side the hub: 110.1 → 108.1 mm here.
+      expect(addition(bare, 'hub-rings')).toMatchObject({
+        required: false,
+        numbers: { wheelBoreMm: 110.1, hubBoreMm: 108.1, ringOuterMm: 110.1, ringInnerMm: 108.1 },
+      });
+      expect(addition(bare, 'hub-rings')?.reason).toContain('110.1 → 108.1 mm');
+
+      // Common practice (no published source): a 106.1 mm ring does not go over a 108.1 mm hub.
+      const wrong = await report(highrange, ['IW-STK-1785-00', 'IW-HR-1101-1061']);
+      expect(check(wrong, 'centre-bore')).toMatchObject({
+        verdict: 'does-not-fit',
+        message:
+          'The hub-centric rings (110.1 → 106.1 mm) do not match this wheel and hub (110.1 → 108.1 mm): choose rings of those sizes.',
+        numbers: { hubBoreMm: 108.1, wheelBoreMm: 110.1, ringOuterMm: 110.1, ringInnerMm: 106.1 },
+        rule: { keys: ['centreBoreFit'] },
+      });
+      expect(wrong.verdict).toBe('does-not-fit');
+
+      const right = await report(highrange, ['IW-STK-1785-00', 'IW-HR-1101-1081']);
+      expect(check(right, 'centre-bore')).toMatchObject({
+        verdict: 'advisory',
+        numbers: { ringOuterMm: 110.1, ringInnerMm: 108.1 },
+      });
+      expect(check(right, 'centre-bore').message).toContain(
+        'the hub-centric rings (110.1 → 108.1 mm) centre the wheel on the hub',
+      );
+      expect(addition(right, 'hub-rings')).toBeUndefined();
+    });
+
+    it('says rings are not needed with a bore that matches the hub, or with the stock wheels', async () => {
+      const matching = await report(strata, ['IW-STK-1780-P20', 'IW-HR-1101-1061']);
+      expect(check(matching, 'centre-bore')).toMatchObject({
+        verdict: 'advisory',
+        message:
+          "The wheel's centre bore matches the hub (106.1 mm): the hub-centric rings (110.1 → 106.1 mm) are not needed.",
+      });
+      const stock = await report(highrange, ['IW-HR-1101-1081']);
+      expect(check(stock, 'centre-bore')).toMatchObject({
+        verdict: 'advisory',
+        numbers: { hubBoreMm: 108.1, ringOuterMm: 110.1, ringInnerMm: 108.1 },
+      });
+      expect(check(stock, 'centre-bore').message).toContain('are not needed');
+      const nothing = await report(highrange, []);
+      expect(nothing.skippedChecks.find((skip) => skip.code === 'centre-bore')?.reason).toBe(
+        'not-applicable',
+      );
     });
   });
 

@@ -18,7 +18,12 @@ interface Option {
 }
 interface Options {
   items: Option[];
-  suggestedAdditions: Array<{ role: string; required: boolean; variantId?: string }>;
+  suggestedAdditions: Array<{
+    role: string;
+    required: boolean;
+    variantId?: string;
+    numbers?: Record<string, number>;
+  }>;
 }
 
 const BEST_FIRST = ['ok', 'advisory', 'needs-certification', 'does-not-fit'];
@@ -147,6 +152,48 @@ describe('planner options (POST /api/planner/options)', () => {
     expect(components.items.map((item) => item.product.sku).sort()).toEqual(
       await madeForStrata('component'),
     );
+  });
+
+  it('marks only hub-centric rings of the suggested sizes (a 108.1 mm hub)', async () => {
+    const highrange = await vehicleModelId(testApp.db, 'Brellin', 'Highrange', '4.5 wagon');
+    const wheel = await productId(testApp.db, 'IW-STK-1785-00');
+    const onHighrange = await options({
+      vehicleModelId: highrange,
+      items: [{ productId: wheel, quantity: 4 }],
+      kind: 'component',
+    });
+    // Common practice (no published source): a 110.1 mm bore wheel on a 108.1 mm hub takes
+    // rings of 110.1 mm outside and 108.1 mm inside.
+    expect(
+      onHighrange.suggestedAdditions.find((addition) => addition.role === 'hub-rings'),
+    ).toMatchObject({
+      required: false,
+      numbers: { wheelBoreMm: 110.1, hubBoreMm: 108.1, ringOuterMm: 110.1, ringInnerMm: 108.1 },
+    });
+    const rightRings = option(onHighrange, 'IW-HR-1101-1081');
+    expect(rightRings.suggestedBy).toEqual(['hub-rings']);
+    expect(rightRings.verdict).not.toBe('does-not-fit');
+    const wrongRings = option(onHighrange, 'IW-HR-1101-1061');
+    expect(wrongRings.suggestedBy).toEqual([]);
+    expect(wrongRings.verdict).toBe('does-not-fit');
+    expect(wrongRings.summary).toContain(
+      'The hub-centric rings (110.1 → 106.1 mm) do not match this wheel and hub (110.1 → 108.1 mm)',
+    );
+
+    // The same wheel on the Strata's 106.1 mm hub: the other way round.
+    const onStrata = await options({
+      vehicleModelId: strata,
+      items: [{ productId: wheel, quantity: 4 }],
+      kind: 'component',
+    });
+    expect(option(onStrata, 'IW-HR-1101-1061').suggestedBy).toEqual(['hub-rings']);
+    expect(option(onStrata, 'IW-HR-1101-1081').suggestedBy).toEqual([]);
+    expect(option(onStrata, 'IW-HR-1101-1081').verdict).toBe('does-not-fit');
+
+    // With the stock wheels nothing asks for rings, and rings are not needed.
+    const stock = await options({ vehicleModelId: highrange, items: [], kind: 'component' });
+    expect(stock.suggestedAdditions.some((addition) => addition.role === 'hub-rings')).toBe(false);
+    expect(option(stock, 'IW-HR-1101-1081').suggestedBy).toEqual([]);
   });
 
   it('points to the kit rating that carries the declared load', async () => {

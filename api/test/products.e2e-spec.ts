@@ -285,6 +285,57 @@ describe('products (HTTP)', () => {
       expect(drop.body.fieldErrors).toEqual({
         'attributes.diffDropMm': ['is required for a diff drop'],
       });
+      const ringsSku = uniqueSku();
+      const rings = await create({
+        sku: ringsSku,
+        kind: 'component',
+        name: 'Rings without sizes',
+        brand: 'Ironwattle',
+        priceCents: 100,
+        attributes: { role: 'hub-rings', ringOuterMm: 110.1 },
+      }).expect(400);
+      expect(rings.body.fieldErrors).toEqual({
+        'attributes.ringInnerMm': ['is required for hub-centric rings'],
+      });
+      const backwards = await create({
+        sku: ringsSku,
+        kind: 'component',
+        name: 'Rings the wrong way round',
+        brand: 'Ironwattle',
+        priceCents: 100,
+        attributes: { role: 'hub-rings', ringOuterMm: 106.1, ringInnerMm: 110.1 },
+      }).expect(400);
+      expect(backwards.body.fieldErrors).toEqual({
+        'attributes.ringInnerMm': ['must be less than ringOuterMm'],
+      });
+      const damper = await create({
+        sku: ringsSku,
+        kind: 'component',
+        name: 'Damper with ring sizes',
+        brand: 'Tarnhill',
+        priceCents: 100,
+        attributes: { role: 'steering-damper', ringOuterMm: 110.1, ringInnerMm: 106.1 },
+      }).expect(400);
+      expect(damper.body.fieldErrors).toEqual({
+        'attributes.ringOuterMm': ['is only for hub-centric rings'],
+        'attributes.ringInnerMm': ['is only for hub-centric rings'],
+      });
+      expect(await countSku(ringsSku)).toBe(0);
+      const sized = await create({
+        sku: ringsSku,
+        kind: 'component',
+        name: 'Hub-centric rings 106.1 to 93.1 mm',
+        brand: 'Ironwattle',
+        priceCents: 3900,
+        // Switched off, so the other specs' planner lists do not change.
+        active: false,
+        attributes: { ringInnerMm: 93.1, ringOuterMm: 106.1, role: 'hub-rings' },
+      }).expect(201);
+      expect(sized.body.attributes).toEqual({
+        role: 'hub-rings',
+        ringOuterMm: 106.1,
+        ringInnerMm: 93.1,
+      });
       const service = await create({
         sku: uniqueSku(),
         kind: 'service',

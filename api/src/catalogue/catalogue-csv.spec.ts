@@ -86,3 +86,42 @@ describe('readCsvRow', () => {
     });
   });
 });
+
+describe('readCsvRow with hub-centric rings', () => {
+  const rings = (attributes: string) =>
+    `IW-HR-1101-1081,component,"Hub-centric rings 110.1 to 108.1 mm, set of four",Ironwattle,42.00,0,,8,0,true,"${attributes}"`;
+
+  it('reads the ring sizes from the attributes JSON', () => {
+    const [row] = readCsvRows(
+      Buffer.from(
+        `${HEADER}\n${rings('{""ringInnerMm"":108.1,""role"":""hub-rings"",""ringOuterMm"":110.1}')}\n`,
+      ),
+    );
+    expect(readCsvRow(row)).toEqual({
+      ok: true,
+      fields: expect.objectContaining({
+        priceCents: 4200,
+        attributes: { role: 'hub-rings', ringOuterMm: 110.1, ringInnerMm: 108.1 },
+      }),
+    });
+  });
+
+  it('names the missing or wrong ring size in the row reason', () => {
+    const [missing] = readCsvRows(
+      Buffer.from(`${HEADER}\n${rings('{""role"":""hub-rings"",""ringOuterMm"":110.1}')}\n`),
+    );
+    expect(readCsvRow(missing)).toEqual({
+      ok: false,
+      reason: 'attributes.ringInnerMm is required for hub-centric rings',
+    });
+    const [reversed] = readCsvRows(
+      Buffer.from(
+        `${HEADER}\n${rings('{""role"":""hub-rings"",""ringOuterMm"":106.1,""ringInnerMm"":110.1}')}\n`,
+      ),
+    );
+    expect(readCsvRow(reversed)).toEqual({
+      ok: false,
+      reason: 'attributes.ringInnerMm must be less than ringOuterMm',
+    });
+  });
+});

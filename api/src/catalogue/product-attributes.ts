@@ -63,6 +63,10 @@ export interface SuspensionKitAttributes {
 export interface ComponentAttributes {
   role: ComponentRole;
   diffDropMm?: number;
+  /** Hub-centric rings only: outer diameter, mm (the side in the wheel's centre bore). */
+  ringOuterMm?: number;
+  /** Hub-centric rings only: inner diameter, mm (the side on the hub spigot). */
+  ringInnerMm?: number;
   massKg?: number;
 }
 
@@ -80,6 +84,9 @@ export interface ProductAttributesByKind {
 }
 
 export type ProductAttributes = ProductAttributesByKind[ProductKind];
+
+/** Ring diameters, mm: the range of wheel centre bores the catalogue takes (WheelAttributesDto). */
+export const RING_DIAMETER_RANGE_MM = { min: 40, max: 200 } as const;
 
 const trim = ({ value }: { value: unknown }) => (typeof value === 'string' ? value.trim() : value);
 
@@ -255,6 +262,28 @@ export class ComponentAttributesDto implements ComponentAttributes {
   diffDropMm?: number;
 
   @ApiPropertyOptional({
+    minimum: RING_DIAMETER_RANGE_MM.min,
+    maximum: RING_DIAMETER_RANGE_MM.max,
+    example: 110.1,
+    description:
+      "Hub-centric rings only (required there): outer diameter, the wheel's centre-bore side, mm (0.1 mm steps)",
+  })
+  @IsOptional()
+  @NumberInRange(RING_DIAMETER_RANGE_MM.min, RING_DIAMETER_RANGE_MM.max, 'mm', 1)
+  ringOuterMm?: number;
+
+  @ApiPropertyOptional({
+    minimum: RING_DIAMETER_RANGE_MM.min,
+    maximum: RING_DIAMETER_RANGE_MM.max,
+    example: 106.1,
+    description:
+      'Hub-centric rings only (required there): inner diameter, the hub side, mm (0.1 mm steps); less than ringOuterMm',
+  })
+  @IsOptional()
+  @NumberInRange(RING_DIAMETER_RANGE_MM.min, RING_DIAMETER_RANGE_MM.max, 'mm', 1)
+  ringInnerMm?: number;
+
+  @ApiPropertyOptional({
     minimum: 0,
     maximum: 1000,
     description: 'Mass added to the vehicle, kg (counted against the GVM)',
@@ -329,6 +358,22 @@ function crossFieldErrors(kind: ProductKind, value: object, path: string): Field
     if (component.role !== 'diff-drop' && component.diffDropMm !== undefined) {
       addError(errors, `${path}.diffDropMm`, 'is only for a diff drop');
     }
+    for (const key of ['ringOuterMm', 'ringInnerMm'] as const) {
+      if (component.role === 'hub-rings' && component[key] === undefined) {
+        addError(errors, `${path}.${key}`, 'is required for hub-centric rings');
+      }
+      if (component.role !== 'hub-rings' && component[key] !== undefined) {
+        addError(errors, `${path}.${key}`, 'is only for hub-centric rings');
+      }
+    }
+    if (
+      component.role === 'hub-rings' &&
+      component.ringOuterMm !== undefined &&
+      component.ringInnerMm !== undefined &&
+      component.ringInnerMm >= component.ringOuterMm
+    ) {
+      addError(errors, `${path}.ringInnerMm`, 'must be less than ringOuterMm');
+    }
   }
   return errors;
 }
@@ -369,7 +414,13 @@ function canonicalAttributes(kind: ProductKind, value: object): ProductAttribute
         'includesExtendedBrakeLines',
       ]);
     case 'component':
-      return pick(value as ComponentAttributes, ['role', 'diffDropMm', 'massKg']);
+      return pick(value as ComponentAttributes, [
+        'role',
+        'diffDropMm',
+        'ringOuterMm',
+        'ringInnerMm',
+        'massKg',
+      ]);
     case 'service':
       return pick(value as ServiceAttributes, ['role', 'perWheel']);
   }

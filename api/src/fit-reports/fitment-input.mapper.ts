@@ -159,6 +159,8 @@ export function componentSpecOf(product: Product): ComponentSpec | null {
       role: component.role,
       name: product.name,
       ...(component.diffDropMm !== undefined ? { diffDropMm: component.diffDropMm } : {}),
+      ...(component.ringOuterMm !== undefined ? { ringOuterMm: component.ringOuterMm } : {}),
+      ...(component.ringInnerMm !== undefined ? { ringInnerMm: component.ringInnerMm } : {}),
       ...(component.massKg !== undefined ? { massKg: component.massKg } : {}),
     };
   }

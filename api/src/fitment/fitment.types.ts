@@ -128,6 +128,10 @@ export interface ComponentSpec {
   name?: string;
   /** For a diff drop: how far it lowers the front differential, mm. */
   diffDropMm?: number;
+  /** For hub-centric rings: outer diameter, mm (the side that sits in the wheel's centre bore). */
+  ringOuterMm?: number;
+  /** For hub-centric rings: inner diameter, mm (the side that sits on the hub spigot). */
+  ringInnerMm?: number;
   /** Mass the component adds to the vehicle, kg (counted in the GVM check). */
   massKg?: number;
 }

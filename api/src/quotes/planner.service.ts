@@ -5,6 +5,7 @@ import { FieldErrorsException, type FieldErrors } from '../common/errors/field-e
 import { FitReportResponse } from '../fit-reports/dto/fit-report.response';
 import { FitReportsService, isMadeFor, summaryOf } from '../fit-reports/fit-reports.service';
 import { componentSpecOf } from '../fit-reports/fitment-input.mapper';
+import { hubRingsMatch } from '../fitment/checks/wheel-checks';
 import {
   type FitReport,
   type SuggestedAddition,
@@ -20,23 +21,34 @@ export function optionSummary(report: FitReport): string {
   return report.verdict === 'ok' ? 'Fits with the rest of the package.' : summaryOf(report);
 }
 
-/** The roles of the current package's suggested additions that this product fills. */
+/**
+ * The roles of the current package's suggested additions that this product fills. A spring
+ * rating is filled by the kit it names; hub-centric rings only by rings of the suggested sizes
+ * (outer = the wheel's bore, inner = the hub, within the centre-bore check's tolerance).
+ */
 export function rolesFilledBy(
   product: Product,
   suggestions: readonly SuggestedAddition[],
 ): string[] {
-  const role = componentSpecOf(product)?.role;
-  return [
-    ...new Set(
-      suggestions
-        .filter((suggestion) =>
-          suggestion.role === 'spring-rating'
-            ? suggestion.variantId === product.id
-            : suggestion.role === role,
-        )
-        .map((suggestion) => suggestion.role),
-    ),
-  ];
+  const component = componentSpecOf(product);
+  const fills = (suggestion: SuggestedAddition): boolean => {
+    if (suggestion.role === 'spring-rating') return suggestion.variantId === product.id;
+    if (suggestion.role !== component?.role) return false;
+    if (suggestion.role !== 'hub-rings') return true;
+    const wanted = suggestion.numbers;
+    return (
+      component.ringOuterMm !== undefined &&
+      component.ringInnerMm !== undefined &&
+      wanted?.ringOuterMm !== undefined &&
+      wanted.ringInnerMm !== undefined &&
+      hubRingsMatch(
+        { ringOuterMm: component.ringOuterMm, ringInnerMm: component.ringInnerMm },
+        wanted.ringOuterMm,
+        wanted.ringInnerMm,
+      )
+    );
+  };
+  return [...new Set(suggestions.filter(fills).map((suggestion) => suggestion.role))];
 }
 
 /**

@@ -1113,6 +1113,16 @@ export interface components {
       role: components['schemas']['ComponentRole'];
       /** @description Diff drops only: how far the front differential is lowered, mm */
       diffDropMm?: number;
+      /**
+       * @description Hub-centric rings only (required there): outer diameter, the wheel's centre-bore side, mm (0.1 mm steps)
+       * @example 110.1
+       */
+      ringOuterMm?: number;
+      /**
+       * @description Hub-centric rings only (required there): inner diameter, the hub side, mm (0.1 mm steps); less than ringOuterMm
+       * @example 106.1
+       */
+      ringInnerMm?: number;
       /** @description Mass added to the vehicle, kg (counted against the GVM) */
       massKg?: number;
     };

@@ -7,7 +7,7 @@ import {
   stockUte,
   trailhandWheel,
 } from '../fitment.fixtures';
-import type { FitmentInput, WheelSpec } from '../fitment.types';
+import type { ComponentSpec, FitmentInput, WheelSpec } from '../fitment.types';
 import { type RuleSetLimits, defaultRuleSetLimits } from '../rule-set-limits';
 import {
   checkBoltPattern,
@@ -15,6 +15,7 @@ import {
   checkStudThread,
   checkWheelLoadRating,
   checkWheelTrackChange,
+  hubRingsMatch,
   normaliseThread,
   parseMetricThread,
 } from './wheel-checks';
@@ -74,12 +75,18 @@ describe('centre bore', () => {
     ).toBe('ok');
   });
 
-  it('advises hub-centric rings for a larger bore', () => {
+  it('advises hub-centric rings for a larger bore, with the ring sizes to look for', () => {
     const outcome = checkCentreBore(withWheel({ centreBoreMm: 110.1 }), defaultRuleSetLimits);
     expect(ranCheck(outcome)).toMatchObject({ verdict: 'advisory', numbers: { differenceMm: 4 } });
-    expect(ranCheck(outcome).message).toContain('hub-centric rings');
+    expect(ranCheck(outcome).message).toContain('hub-centric rings (110.1 → 106.1 mm)');
+    // Common practice (no published source): the ring's outer side fits the wheel's bore and its
+    // inner side the hub, so 110.1 mm bore on a 106.1 mm hub takes 110.1 → 106.1 mm rings.
     expect(outcome.ran && outcome.additions).toEqual([
-      expect.objectContaining({ role: 'hub-rings', required: false }),
+      expect.objectContaining({
+        role: 'hub-rings',
+        required: false,
+        numbers: { wheelBoreMm: 110.1, hubBoreMm: 106.1, ringOuterMm: 110.1, ringInnerMm: 106.1 },
+      }),
     ]);
   });
 
@@ -87,6 +94,158 @@ describe('centre bore', () => {
     expect(
       ranCheck(checkCentreBore(withWheel({ centreBoreMm: 100 }), defaultRuleSetLimits)).verdict,
     ).toBe('does-not-fit');
+  });
+
+  describe('with hub-centric rings in the package', () => {
+    /** The ute on a 108.1 mm hub, a 110.1 mm bore wheel and these rings. */
+    function ringed(rings: ComponentSpec[], wheel: Partial<WheelSpec> = { centreBoreMm: 110.1 }) {
+      return withWheel(wheel, {
+        vehicle: { ...korrinRidgebackUte, centreBoreMm: 108.1 },
+        components: rings,
+      });
+    }
+    const rings = (ringOuterMm: number, ringInnerMm: number): ComponentSpec => ({
+      role: 'hub-rings',
+      name: `Rings ${ringOuterMm} to ${ringInnerMm}`,
+      ringOuterMm,
+      ringInnerMm,
+    });
+
+    it('says matching rings centre the wheel, and suggests no more rings', () => {
+      // Common practice (no published source): 110.1 → 108.1 mm rings centre a 110.1 mm bore
+      // wheel on a 108.1 mm hub.
+      const outcome = checkCentreBore(ringed([rings(110.1, 108.1)]), defaultRuleSetLimits);
+      const check = ranCheck(outcome);
+      expect(check).toMatchObject({
+        verdict: 'advisory',
+        numbers: {
+          hubBoreMm: 108.1,
+          wheelBoreMm: 110.1,
+          differenceMm: 2,
+          ringOuterMm: 110.1,
+          ringInnerMm: 108.1,
+        },
+        rule: { keys: ['centreBoreFit'] },
+      });
+      expect(check.message).toContain('the hub-centric rings (110.1 → 108.1 mm) centre the wheel');
+      expect(outcome.ran && outcome.additions).toEqual([]);
+    });
+
+    it('accepts ring sizes within the bore tolerance of 0.05 mm', () => {
+      const within = ranCheck(
+        checkCentreBore(
+          ringed([rings(110.1, 108.1)], { centreBoreMm: 110.14 }),
+          defaultRuleSetLimits,
+        ),
+      );
+      expect(within.verdict).toBe('advisory');
+      const past = ranCheck(
+        checkCentreBore(
+          ringed([rings(110.1, 108.1)], { centreBoreMm: 110.16 }),
+          defaultRuleSetLimits,
+        ),
+      );
+      expect(past.verdict).toBe('does-not-fit');
+    });
+
+    it('refuses rings whose inner side does not match the hub (110.1 → 106.1 mm on 108.1 mm)', () => {
+      // Common practice (no published source): a 106.1 mm ring does not go over a 108.1 mm hub.
+      const outcome = checkCentreBore(ringed([rings(110.1, 106.1)]), defaultRuleSetLimits);
+      const check = ranCheck(outcome);
+      expect(check.verdict).toBe('does-not-fit');
+      expect(check.message).toBe(
+        'The hub-centric rings (110.1 → 106.1 mm) do not match this wheel and hub (110.1 → 108.1 mm): choose rings of those sizes.',
+      );
+      expect(check.numbers).toMatchObject({ ringOuterMm: 110.1, ringInnerMm: 106.1 });
+      expect(outcome.ran && outcome.additions).toEqual([]);
+    });
+
+    it('refuses rings whose outer side does not match the wheel bore', () => {
+      // Common practice (no published source): a 112.1 mm ring does not go into a 110.1 mm bore,
+      // and a 108.5 mm ring leaves the wheel loose on it.
+      for (const wrong of [rings(112.1, 108.1), rings(108.5, 108.1)]) {
+        const check = ranCheck(checkCentreBore(ringed([wrong]), defaultRuleSetLimits));
+        expect(check.verdict).toBe('does-not-fit');
+        expect(check.message).toContain('do not match this wheel and hub (110.1 → 108.1 mm)');
+        expect(check.numbers.ringOuterMm).toBe(wrong.ringOuterMm);
+      }
+    });
+
+    it('refuses a package with one matching and one wrong set, naming the wrong one', () => {
+      const check = ranCheck(
+        checkCentreBore(ringed([rings(110.1, 108.1), rings(110.1, 106.1)]), defaultRuleSetLimits),
+      );
+      expect(check.verdict).toBe('does-not-fit');
+      expect(check.message).toContain('(110.1 → 106.1 mm) do not match');
+    });
+
+    it('says rings are not needed when the wheel bore matches the hub', () => {
+      const check = ranCheck(
+        checkCentreBore(
+          ringed([rings(110.1, 108.1)], { centreBoreMm: 108.1 }),
+          defaultRuleSetLimits,
+        ),
+      );
+      expect(check.verdict).toBe('advisory');
+      expect(check.message).toBe(
+        "The wheel's centre bore matches the hub (108.1 mm): the hub-centric rings (110.1 → 108.1 mm) are not needed.",
+      );
+    });
+
+    it('says rings are not needed with the stock wheels (the check runs for them)', () => {
+      const input: FitmentInput = {
+        vehicle: { ...korrinRidgebackUte, centreBoreMm: 108.1 },
+        components: [rings(110.1, 108.1)],
+      };
+      const check = ranCheck(checkCentreBore(buildFitmentContext(input), defaultRuleSetLimits));
+      expect(check).toMatchObject({
+        verdict: 'advisory',
+        numbers: { hubBoreMm: 108.1, ringOuterMm: 110.1, ringInnerMm: 108.1 },
+      });
+      expect(check.message).toContain('are not needed');
+      expect(
+        skippedCheck(checkCentreBore(buildFitmentContext(stockUte()), defaultRuleSetLimits)).reason,
+      ).toBe('not-applicable');
+    });
+
+    it('does not make a bore smaller than the hub fit', () => {
+      const check = ranCheck(
+        checkCentreBore(
+          ringed([rings(110.1, 108.1)], { centreBoreMm: 106.1 }),
+          defaultRuleSetLimits,
+        ),
+      );
+      expect(check.verdict).toBe('does-not-fit');
+      expect(check.message).toContain('smaller than the hub');
+    });
+
+    it('advises checking rings whose sizes are not recorded', () => {
+      const check = ranCheck(
+        checkCentreBore(ringed([{ role: 'hub-rings', name: 'Old rings' }]), defaultRuleSetLimits),
+      );
+      expect(check.verdict).toBe('advisory');
+      expect(check.message).toContain('could not be checked');
+      expect(check.message).toContain('110.1 → 108.1 mm');
+    });
+
+    it('is skipped when the rule set switches it off', () => {
+      const off = rules({
+        centreBoreFit: { ...defaultRuleSetLimits.centreBoreFit, enabled: false },
+      });
+      expect(skippedCheck(checkCentreBore(ringed([rings(110.1, 106.1)]), off)).reason).toBe(
+        'disabled-by-rule-set',
+      );
+    });
+  });
+
+  describe('hubRingsMatch', () => {
+    it('needs both sides within 0.05 mm', () => {
+      const sizes = { ringOuterMm: 110.1, ringInnerMm: 108.1 };
+      expect(hubRingsMatch(sizes, 110.1, 108.1)).toBe(true);
+      expect(hubRingsMatch(sizes, 110.1, 108.14)).toBe(true);
+      expect(hubRingsMatch(sizes, 110.1, 106.1)).toBe(false);
+      expect(hubRingsMatch(sizes, 112.1, 108.1)).toBe(false);
+    });
   });
 });
 

@@ -1,6 +1,8 @@
 /**
- * Checks of the replacement wheel against the vehicle: bolt pattern, centre bore, stud thread,
- * wheel load rating and wheel track change. Each applies only when a replacement wheel is given.
+ * Checks of the replacement wheel against the vehicle: bolt pattern, centre bore (with any
+ * hub-centric rings in the package), stud thread, wheel load rating and wheel track change. Each
+ * applies only when a replacement wheel is given; the centre-bore check also runs when the stock
+ * wheels stay but the package holds hub-centric rings (they are not needed).
  */
 import { checked, show, showSigned, skipped, switchedOff } from '../check-outcome';
 import type { FitmentContext } from '../fitment-context';
@@ -44,47 +46,149 @@ export function checkBoltPattern(context: FitmentContext, ruleSet: RuleSetLimits
   });
 }
 
+/** The sizes of a set of hub-centric rings. */
+export interface HubRingSizes {
+  /** Outer diameter, mm: the side that sits in the wheel's centre bore. */
+  ringOuterMm: number;
+  /** Inner diameter, mm: the side that sits on the hub spigot. */
+  ringInnerMm: number;
+}
+
+/**
+ * Common practice (no published source): a hub-centric ring centres the wheel only when its
+ * outer diameter matches the wheel's centre bore and its inner diameter matches the hub, each
+ * within the centre-bore tolerance. A ring too small for the hub does not go on; one too small
+ * for the bore leaves the wheel free to sit off centre.
+ */
+export function hubRingsMatch(
+  rings: HubRingSizes,
+  wheelBoreMm: number,
+  hubBoreMm: number,
+): boolean {
+  return (
+    Math.abs(rings.ringOuterMm - wheelBoreMm) <= BORE_TOLERANCE_MM &&
+    Math.abs(rings.ringInnerMm - hubBoreMm) <= BORE_TOLERANCE_MM
+  );
+}
+
+function ringSizesText(outerMm: number, innerMm: number): string {
+  return `${show(outerMm, 2)} → ${show(innerMm, 2)} mm`;
+}
+
+/** The hub-centric rings in the package, split by whether their sizes are recorded. */
+function hubRingsIn(context: FitmentContext): { sized: HubRingSizes[]; unsized: number } {
+  const sized: HubRingSizes[] = [];
+  let unsized = 0;
+  for (const component of context.input.components ?? []) {
+    if (component.role !== 'hub-rings') continue;
+    if (component.ringOuterMm === undefined || component.ringInnerMm === undefined) unsized += 1;
+    else sized.push({ ringOuterMm: component.ringOuterMm, ringInnerMm: component.ringInnerMm });
+  }
+  return { sized, unsized };
+}
+
+function ringNumbers(rings: HubRingSizes | undefined): Record<string, number> {
+  return rings ? { ringOuterMm: rings.ringOuterMm, ringInnerMm: rings.ringInnerMm } : {};
+}
+
+/** "the hub-centric rings (110.1 → 106.1 mm)", or without sizes when none are recorded. */
+function ringsNamed(rings: HubRingSizes | undefined): string {
+  return rings
+    ? `the hub-centric rings (${ringSizesText(rings.ringOuterMm, rings.ringInnerMm)})`
+    : 'the hub-centric rings';
+}
+
 export function checkCentreBore(context: FitmentContext, ruleSet: RuleSetLimits): CheckOutcome {
   const code = 'centre-bore';
   if (!ruleSet.centreBoreFit.enabled) return switchedOff(code);
   const wheel = context.input.wheel;
-  if (!wheel) return stockWheelsStay(code);
+  const rings = hubRingsIn(context);
+  const hasRings = rings.sized.length > 0 || rings.unsized > 0;
+  const firstRings = rings.sized[0];
   const hubBoreMm = context.vehicle.centreBoreMm;
-  const differenceMm = wheel.centreBoreMm - hubBoreMm;
-  const numbers = { hubBoreMm, wheelBoreMm: wheel.centreBoreMm, differenceMm };
   const keys: ['centreBoreFit'] = ['centreBoreFit'];
+  if (!wheel) {
+    if (!hasRings) return stockWheelsStay(code);
+    return checked(ruleSet, {
+      code,
+      verdict: 'advisory',
+      message: `The stock wheels stay and sit on the hub (${show(hubBoreMm, 2)} mm): ${ringsNamed(firstRings)} are not needed.`,
+      numbers: { hubBoreMm, ...ringNumbers(firstRings) },
+      keys,
+    });
+  }
+  const wheelBoreMm = wheel.centreBoreMm;
+  const differenceMm = wheelBoreMm - hubBoreMm;
+  const numbers = { hubBoreMm, wheelBoreMm, differenceMm };
   if (differenceMm < -BORE_TOLERANCE_MM) {
     return checked(ruleSet, {
       code,
       verdict: 'does-not-fit',
-      message: `The wheel's centre bore (${show(wheel.centreBoreMm, 2)} mm) is smaller than the hub (${show(hubBoreMm, 2)} mm): the wheel will not sit on the hub.`,
-      numbers,
+      message: `The wheel's centre bore (${show(wheelBoreMm, 2)} mm) is smaller than the hub (${show(hubBoreMm, 2)} mm): the wheel will not sit on the hub.${hasRings ? ' Hub-centric rings cannot change that.' : ''}`,
+      numbers: { ...numbers, ...ringNumbers(firstRings) },
       keys,
     });
   }
-  if (differenceMm > BORE_TOLERANCE_MM) {
+  if (differenceMm <= BORE_TOLERANCE_MM) {
+    return checked(ruleSet, {
+      code,
+      verdict: hasRings ? 'advisory' : 'ok',
+      message: hasRings
+        ? `The wheel's centre bore matches the hub (${show(hubBoreMm, 2)} mm): ${ringsNamed(firstRings)} are not needed.`
+        : `The wheel's centre bore matches the hub (${show(hubBoreMm, 2)} mm).`,
+      numbers: { ...numbers, ...ringNumbers(firstRings) },
+      keys,
+    });
+  }
+  const larger = `The wheel's centre bore (${show(wheelBoreMm, 2)} mm) is larger than the hub (${show(hubBoreMm, 2)} mm)`;
+  const needed = ringSizesText(wheelBoreMm, hubBoreMm);
+  const wrong = rings.sized.find((sizes) => !hubRingsMatch(sizes, wheelBoreMm, hubBoreMm));
+  if (wrong) {
+    return checked(ruleSet, {
+      code,
+      verdict: 'does-not-fit',
+      message: `The hub-centric rings (${ringSizesText(wrong.ringOuterMm, wrong.ringInnerMm)}) do not match this wheel and hub (${needed}): choose rings of those sizes.`,
+      numbers: { ...numbers, ...ringNumbers(wrong) },
+      keys,
+    });
+  }
+  if (rings.unsized > 0) {
     return checked(ruleSet, {
       code,
       verdict: 'advisory',
-      message: `The wheel's centre bore (${show(wheel.centreBoreMm, 2)} mm) is larger than the hub (${show(hubBoreMm, 2)} mm): hub-centric rings centre the wheel on the hub.`,
-      numbers,
+      message: `${larger}, and the sizes of the hub-centric rings in the package are not recorded, so they could not be checked: make sure they are ${needed} before fitting.`,
+      numbers: { ...numbers, ...ringNumbers(firstRings) },
       keys,
-      additions: [
-        {
-          role: 'hub-rings',
-          reason: `Hub-centric rings ${show(wheel.centreBoreMm, 2)} → ${show(hubBoreMm, 2)} mm centre the wheel on the hub and stop vibration.`,
-          required: false,
-          numbers: { wheelBoreMm: wheel.centreBoreMm, hubBoreMm },
-        },
-      ],
+    });
+  }
+  if (firstRings) {
+    return checked(ruleSet, {
+      code,
+      verdict: 'advisory',
+      message: `${larger}: ${ringsNamed(firstRings)} centre the wheel on the hub. Keep them in place whenever the wheel is refitted.`,
+      numbers: { ...numbers, ...ringNumbers(firstRings) },
+      keys,
     });
   }
   return checked(ruleSet, {
     code,
-    verdict: 'ok',
-    message: `The wheel's centre bore matches the hub (${show(hubBoreMm, 2)} mm).`,
+    verdict: 'advisory',
+    message: `${larger}: hub-centric rings (${needed}) centre the wheel on the hub.`,
     numbers,
     keys,
+    additions: [
+      {
+        role: 'hub-rings',
+        reason: `Hub-centric rings ${needed} centre the wheel on the hub and stop vibration.`,
+        required: false,
+        numbers: {
+          wheelBoreMm,
+          hubBoreMm,
+          ringOuterMm: wheelBoreMm,
+          ringInnerMm: hubBoreMm,
+        },
+      },
+    ],
   });
 }
 

@@ -261,6 +261,22 @@ export const attributeFields: Record<ProductKind, readonly AttributeField[]> = {
       helperText: 'Diff drops only: how far the front differential is lowered.',
     },
     {
+      key: 'ringOuterMm',
+      label: 'Ring outer diameter (mm)',
+      type: 'number',
+      optional: true,
+      rule: { min: 40, max: 200, unit: 'mm', decimals: 1 },
+      helperText: 'Hub-centric rings only: the wheel-bore side.',
+    },
+    {
+      key: 'ringInnerMm',
+      label: 'Ring inner diameter (mm)',
+      type: 'number',
+      optional: true,
+      rule: { min: 40, max: 200, unit: 'mm', decimals: 1 },
+      helperText: 'Hub-centric rings only: the hub side.',
+    },
+    {
       key: 'massKg',
       label: 'Added mass (kg)',
       type: 'number',
@@ -428,6 +444,30 @@ function attributeSchema(kind: ProductKind) {
         return this.createError({
           path: `${this.path}.diffDropMm`,
           message: 'Only a diff drop has this; leave it empty.',
+        });
+      }
+      return true;
+    });
+    schema = schema.test('hub-rings', function check(value: Record<string, unknown>) {
+      const isRings = value?.role === 'hub-rings';
+      for (const key of ['ringOuterMm', 'ringInnerMm'] as const) {
+        if (isRings && !isSet(value?.[key])) {
+          return this.createError({
+            path: `${this.path}.${key}`,
+            message: 'Enter both ring diameters: the rings are checked against the wheel and hub.',
+          });
+        }
+        if (!isRings && isSet(value?.[key])) {
+          return this.createError({
+            path: `${this.path}.${key}`,
+            message: 'Only hub-centric rings have this; leave it empty.',
+          });
+        }
+      }
+      if (isRings && Number(value?.ringInnerMm) >= Number(value?.ringOuterMm)) {
+        return this.createError({
+          path: `${this.path}.ringInnerMm`,
+          message: 'Must be smaller than the outer diameter.',
         });
       }
       return true;
