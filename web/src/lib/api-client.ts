@@ -168,8 +168,9 @@ async function request<T>(
   path: string,
   body?: unknown,
   kind: ResponseKind = 'json',
+  withCsrf = true,
 ): Promise<T> {
-  const mutating = MUTATING_METHODS.has(method);
+  const mutating = withCsrf && MUTATING_METHODS.has(method);
   const accept = kind === 'blob' ? '*/*' : 'application/json';
   let response = await send(method, path, body, mutating ? await currentCsrfToken() : null, accept);
 
@@ -198,6 +199,11 @@ async function request<T>(
 export const api = {
   get: <T>(path: string) => request<T>('GET', path),
   post: <T>(path: string, body?: unknown) => request<T>('POST', path, body ?? {}),
+  /**
+   * A POST to a route that only computes (the price preview, the planner options): the API
+   * needs no CSRF token there, so a guest planning a build opens no session until they save.
+   */
+  compute: <T>(path: string, body: unknown) => request<T>('POST', path, body, 'json', false),
   put: <T>(path: string, body?: unknown) => request<T>('PUT', path, body ?? {}),
   patch: <T>(path: string, body?: unknown) => request<T>('PATCH', path, body ?? {}),
   delete: <T = void>(path: string) => request<T>('DELETE', path),

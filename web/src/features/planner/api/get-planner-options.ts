@@ -8,7 +8,7 @@ import type { PlannerOptionsRequest, PlannerOptionsResponse } from '@/types/api'
  * A POST because the current selection travels in the body; it writes nothing.
  */
 export function getPlannerOptions(body: PlannerOptionsRequest): Promise<PlannerOptionsResponse> {
-  return api.post<PlannerOptionsResponse>('/api/planner/options', body);
+  return api.compute<PlannerOptionsResponse>('/api/planner/options', body);
 }
 
 export function plannerOptionsQueryOptions(body: PlannerOptionsRequest) {

@@ -4,7 +4,7 @@ import type { QuotePackageRequest, QuotePreview } from '@/types/api';
 
 /** The fit report and price of the package as it stands; the API saves nothing. */
 export function previewQuote(body: QuotePackageRequest): Promise<QuotePreview> {
-  return api.post<QuotePreview>('/api/quotes/preview', body);
+  return api.compute<QuotePreview>('/api/quotes/preview', body);
 }
 
 export function quotePreviewQueryOptions(body: QuotePackageRequest) {
