@@ -26,6 +26,9 @@ export async function createApp(): Promise<NestExpressApplication> {
 
   app.set('trust proxy', config.trustProxy);
   app.disable('x-powered-by');
+  // API answers are no-store: an ETag (a hash of every JSON body) would only cost time. Static
+  // files of the web app keep theirs (serve-static sets its own).
+  app.set('etag', false);
   app.use(
     helmet({
       contentSecurityPolicy: {

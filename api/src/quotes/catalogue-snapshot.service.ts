@@ -40,9 +40,11 @@ export class CatalogueSnapshotService {
   ) {}
 
   async current(): Promise<CatalogueSnapshot> {
-    const result = await this.pool.query<{ revision: string }>(
-      'select "revision" from "catalogue_revision" where "id" = 1',
-    );
+    // A named (prepared) statement: parsed once per connection, run on every preview.
+    const result = await this.pool.query<{ revision: string }>({
+      name: 'catalogue-revision',
+      text: 'select "revision" from "catalogue_revision" where "id" = 1',
+    });
     const revision = result.rows[0]?.revision;
     if (revision === undefined) {
       throw new InternalServerErrorException(

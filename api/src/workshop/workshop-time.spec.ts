@@ -27,6 +27,15 @@ describe('workshop time zone helpers', () => {
     expect(endOfLocalDay('2027-07-15', 'Australia/Sydney').toISOString()).toBe(
       '2027-07-15T13:59:59.999Z',
     );
+    // Asked again (the kept answer), and for the same date in another zone.
+    expect(endOfLocalDay('2027-07-15', 'Australia/Sydney').toISOString()).toBe(
+      '2027-07-15T13:59:59.999Z',
+    );
+    // Source: IANA tz database, Australia/Perth: AWST, UTC+08:00 all year.
+    expect(endOfLocalDay('2027-07-15', 'Australia/Perth').toISOString()).toBe(
+      '2027-07-15T15:59:59.999Z',
+    );
+    expect(localDateOf(new Date('2027-07-15T16:00:00.000Z'), 'Australia/Perth')).toBe('2027-07-16');
   });
 
   it('handles the days daylight saving starts and ends (23 and 25 hour days)', () => {

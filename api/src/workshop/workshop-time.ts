@@ -21,16 +21,63 @@ export function isKnownTimeZone(timeZone: string): boolean {
   return DateTime.now().setZone(timeZone).isValid;
 }
 
+/**
+ * Both functions below run on every price preview, so their answers are kept: a zone's date
+ * formatter is built once, and the end of a given local day never changes while the process runs
+ * (the zone rules are Node's ICU data). Bounded so the memory stays small.
+ */
+const MAX_KEPT = 512;
+const dateFormats = new Map<string, Intl.DateTimeFormat>();
+const dayEnds = new Map<string, number>();
+
+function remember<K, V>(map: Map<K, V>, key: K, value: V): V {
+  if (map.size >= MAX_KEPT) map.clear();
+  map.set(key, value);
+  return value;
+}
+
+/** Per zone, the local day last asked about: its date and the instants it runs between. */
+const lastDays = new Map<string, { date: string; startMs: number; endMs: number }>();
+
 /** The calendar date (YYYY-MM-DD) an instant falls on in the time zone. */
 export function localDateOf(instant: Date, timeZone: string): string {
-  const local = DateTime.fromJSDate(instant, { zone: timeZone });
-  if (!local.isValid) throw new RangeError(`Unknown time zone '${timeZone}'`);
-  return local.toISODate() as string;
+  const ms = instant.getTime();
+  const last = lastDays.get(timeZone);
+  if (last && ms >= last.startMs && ms <= last.endMs) return last.date;
+  let format = dateFormats.get(timeZone);
+  if (!format) {
+    if (!DateTime.fromJSDate(instant, { zone: timeZone }).isValid) {
+      throw new RangeError(`Unknown time zone '${timeZone}'`);
+    }
+    // en-CA writes dates as YYYY-MM-DD.
+    format = remember(
+      dateFormats,
+      timeZone,
+      new Intl.DateTimeFormat('en-CA', {
+        timeZone,
+        year: 'numeric',
+        month: '2-digit',
+        day: '2-digit',
+      }),
+    );
+  }
+  const date = format.format(instant);
+  const day = zoned(date, timeZone);
+  remember(lastDays, timeZone, {
+    date,
+    startMs: day.startOf('day').toMillis(),
+    endMs: day.endOf('day').toMillis(),
+  });
+  return date;
 }
 
 /** The last millisecond of that calendar day in the time zone, as an instant (UTC). */
 export function endOfLocalDay(date: string, timeZone: string): Date {
-  return zoned(date, timeZone).endOf('day').toJSDate();
+  const key = `${timeZone} ${date}`;
+  const kept = dayEnds.get(key);
+  if (kept !== undefined) return new Date(kept);
+  const end = zoned(date, timeZone).endOf('day').toMillis();
+  return new Date(remember(dayEnds, key, end));
 }
 
 /** "2026-12-31" → "31 December 2026" (the calendar date as the quote and its PDF print it). */

@@ -175,10 +175,7 @@ export class PackagePriceResponse {
   roundingNote!: string;
 
   static from(price: PackagePrice): PackagePriceResponse {
-    // Plain JSON in, plain JSON out: a deep copy, so no caller can change the snapshot.
-    return Object.assign(
-      new PackagePriceResponse(),
-      JSON.parse(JSON.stringify(price)) as PackagePrice,
-    );
+    // The engine's result and a loaded snapshot are both fresh objects of this request: no copy.
+    return Object.assign(new PackagePriceResponse(), price);
   }
 }
