@@ -1011,6 +1011,25 @@ describe('quotes: preview, save, versions, PDF', () => {
     });
   });
 
+  it('leaves a quote row without any version out of the lists instead of failing', async () => {
+    const model = await vehicleModelId(testApp.db, 'Vantrel', 'Strata', 'SR dual cab');
+    const bare = await testApp.db.query<{ id: string }>(
+      `insert into quote (id, created_at, updated_at, customer_id, created_by_id, vehicle_model_id, uses)
+       values (gen_random_uuid(), now(), now(), $1, $1, $2, '[]') returning id`,
+      [customerId, model],
+    );
+    try {
+      for (const session of [desk, customer]) {
+        const list = (await session.agent.get('/api/quotes').expect(200)).body as {
+          items: { id: string }[];
+        };
+        expect(list.items.some((item) => item.id === bare.rows[0].id)).toBe(false);
+      }
+    } finally {
+      await testApp.db.query('delete from quote where id = $1', [bare.rows[0].id]);
+    }
+  });
+
   it('finds quotes by the rego of the customer’s vehicle', async () => {
     const rego = (
       await testApp.db.query<{ id: string; rego: string }>(

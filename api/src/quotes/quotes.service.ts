@@ -54,8 +54,13 @@ function seesEveryQuote(user: User): boolean {
 }
 
 /** Newest version first is the last one: versions are loaded in number order. */
-function latestOf(quote: Quote): QuoteVersion {
+/**
+ * The newest version. Every quote the API saves has one (quote and version 1 are written in one
+ * transaction); a row written past the API without one is left out of lists, not a 500.
+ */
+function latestOf(quote: Quote): QuoteVersion | undefined {
   const versions = quote.versions.getItems();
+  if (versions.length === 0) return undefined;
   return versions.reduce((latest, version) => (version.number > latest.number ? version : latest));
 }
 
@@ -227,9 +232,10 @@ export class QuotesService {
       now,
     );
     return {
-      items: quotes.map((quote): QuoteSummaryResponse => {
+      items: quotes.flatMap((quote): QuoteSummaryResponse[] => {
         const latest = latestOf(quote);
-        return {
+        if (!latest) return [];
+        const summary: QuoteSummaryResponse = {
           id: quote.id,
           number: quote.number,
           reference: quoteReference(quote.number),
@@ -250,6 +256,7 @@ export class QuotesService {
           versionCount: quote.versions.length,
           createdAt: quote.createdAt.toISOString(),
         };
+        return [summary];
       }),
     };
   }
@@ -350,7 +357,7 @@ export class QuotesService {
         { id: loaded.id },
         { lockMode: LockMode.PESSIMISTIC_WRITE, refresh: true },
       );
-      const reason = refusalOf(version, latestOf(quote).number, now);
+      const reason = refusalOf(version, latestOf(quote)?.number ?? version.number, now);
       if (reason) {
         await this.persistExpiry([version], now);
         return reason;
@@ -401,7 +408,7 @@ export class QuotesService {
       { quote: quote.id },
       { orderBy: { createdAt: 'asc', id: 'asc' } },
     );
-    const latestNumber = latestOf(quote).number;
+    const latestNumber = latestOf(quote)?.number ?? 0;
     return {
       id: quote.id,
       number: quote.number,
