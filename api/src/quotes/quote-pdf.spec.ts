@@ -6,7 +6,7 @@ import { defaultRuleSetLimits } from '../fitment/rule-set-limits';
 import { formatCents } from '../pricing/cents';
 import { pricePackage } from '../pricing/price-package';
 import { demoPackage, packageLine } from '../pricing/pricing.fixtures';
-import { LOCAL_RULES_CAUTION, type QuotePdfInput, renderQuotePdf } from './quote-pdf';
+import { LOCAL_RULES_CAUTION, type QuotePdfInput, printable, renderQuotePdf } from './quote-pdf';
 
 function input(overrides: Partial<QuotePdfInput> = {}): QuotePdfInput {
   return {
@@ -78,6 +78,36 @@ describe('quote PDF', () => {
     }
     expect(text).toContain('−$281.70');
     expect(text).toContain(`Q-000042 v1 · Page ${pages} of ${pages}`);
+  });
+
+  it('writes arrows and comparison signs out in words, as the Latin subset of Roboto lacks them', async () => {
+    expect(printable('Hub-centric rings 110.1 → 106.1 mm')).toBe(
+      'Hub-centric rings 110.1 to 106.1 mm',
+    );
+    expect(printable('≤ 50 mm, ≥ 2 bolts, ≈ 3 %')).toBe(
+      'at most 50 mm, at least 2 bolts, about 3 %',
+    );
+    const data = input();
+    const [first, ...rest] = data.fitReport.checks;
+    const withArrow: QuotePdfInput = {
+      ...data,
+      fitReport: {
+        ...data.fitReport,
+        checks: [
+          {
+            ...first,
+            verdict: 'advisory',
+            message: 'The rings (110.1 → 106.1 mm) are not needed.',
+          },
+          ...rest,
+        ],
+      },
+    };
+    const parser = new PDFParse({ data: await renderQuotePdf(withArrow) });
+    const text = (await parser.getText()).text;
+    await parser.destroy();
+    expect(text).toContain('The rings (110.1 to 106.1 mm) are not needed.');
+    expect(text).not.toContain('→');
   });
 
   it('runs onto more pages when the package is long, numbering every page', async () => {

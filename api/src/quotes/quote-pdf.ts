@@ -67,6 +67,24 @@ function robotoFonts(): { regular: Buffer; bold: Buffer } {
   return fonts;
 }
 
+/**
+ * The shipped Roboto faces are the Latin subset: characters outside it would print as empty
+ * boxes. The report's messages use a few of them; they are written out in words here.
+ */
+const OUTSIDE_LATIN_SUBSET: ReadonlyArray<[RegExp, string]> = [
+  [/\s*→\s*/g, ' to '],
+  [/≤\s*/g, 'at most '],
+  [/≥\s*/g, 'at least '],
+  [/≈\s*/g, 'about '],
+];
+
+export function printable(text: string): string {
+  return OUTSIDE_LATIN_SUBSET.reduce(
+    (result, [pattern, words]) => result.replace(pattern, words),
+    text,
+  );
+}
+
 const MARGIN = 50;
 const FOOTER_SPACE = 30;
 const COLUMNS = { description: 290, quantity: 60, unit: 70, amount: 75 };
@@ -127,7 +145,8 @@ export function renderQuotePdf(input: QuotePdfInput): Promise<Buffer> {
     doc.moveDown(0.8).font('bold').fontSize(12).text(text, MARGIN, doc.y, { width });
     doc.moveDown(0.2).font('body').fontSize(10);
   };
-  const paragraph = (text: string, size = 10) => {
+  const paragraph = (raw: string, size = 10) => {
+    const text = printable(raw);
     doc.font('body').fontSize(size);
     ensureSpace(doc.heightOfString(text, { width }) + 2);
     doc.text(text, MARGIN, doc.y, { width });
@@ -175,12 +194,12 @@ export function renderQuotePdf(input: QuotePdfInput): Promise<Buffer> {
   ) => {
     doc.font(font).fontSize(10);
     const height = Math.max(
-      doc.heightOfString(cells.description, { width: COLUMNS.description }),
+      doc.heightOfString(printable(cells.description), { width: COLUMNS.description }),
       doc.heightOfString(cells.unit, { width: COLUMNS.unit }),
     );
     ensureSpace(height + 4);
     const y = doc.y;
-    doc.text(cells.description, x.description, y, { width: COLUMNS.description });
+    doc.text(printable(cells.description), x.description, y, { width: COLUMNS.description });
     doc.text(cells.quantity, x.quantity, y, { width: COLUMNS.quantity, align: 'right' });
     doc.text(cells.unit, x.unit, y, { width: COLUMNS.unit, align: 'right' });
     doc.text(cells.amount, x.amount, y, { width: COLUMNS.amount, align: 'right' });
