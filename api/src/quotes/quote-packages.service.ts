@@ -7,7 +7,6 @@ import { CustomerVehicle } from '../customer-vehicles/entities/customer-vehicle.
 import { FitReportsService, isMadeFor, vehicleName } from '../fit-reports/fit-reports.service';
 import { attributesOf } from '../fit-reports/fitment-input.mapper';
 import type { FitReport } from '../fitment/fitment.types';
-import type { RuleSetLimits } from '../fitment/rule-set-limits';
 import { pricePackage } from '../pricing/price-package';
 import { validatePricingInput } from '../pricing/pricing-input';
 import type { PackageLine, PackagePrice } from '../pricing/pricing.types';
@@ -262,13 +261,6 @@ export class QuotePackagesService {
       validUntilDate,
       validUntil: endOfLocalDay(validUntilDate, settings.timeZone),
     };
-  }
-
-  /** The default rule set (read per request: a manager may change it at any time). */
-  async defaultRuleSet(): Promise<RuleSetLimits> {
-    const ruleSet = await this.fitReports.engineRuleSet();
-    if (!ruleSet) throw new InternalServerErrorException('No default rule set is stored');
-    return ruleSet;
   }
 }
 

@@ -41,11 +41,6 @@ export class WorkshopService {
     return settingsOf(await this.load());
   }
 
-  /** The pricing engine's policy. */
-  async pricingPolicy(): Promise<PricingPolicy> {
-    return pricingPolicyOf(await this.load());
-  }
-
   async policy(): Promise<PolicyResponse> {
     const workshop = await this.load();
     return PolicyResponse.from(pricingPolicyOf(workshop), workshop.updatedAt);
