@@ -1,18 +1,10 @@
-import type { MailContent } from '../mail/templates/password-reset.mail';
+import escapeHtml from 'escape-html';
+import type { MailContent } from '../mail/templates/mail-content';
 
 export interface SetPasswordMailInput {
   name: string;
   setPasswordUrl: string;
   validForHours: number;
-}
-
-function escapeHtml(value: string): string {
-  return value
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&#39;');
 }
 
 /** The e-mail to a customer whose account the workshop desk made: choose a password. */

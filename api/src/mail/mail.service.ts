@@ -1,7 +1,7 @@
 import { Injectable, Logger, type OnApplicationShutdown } from '@nestjs/common';
 import { createTransport, type Transporter } from 'nodemailer';
 import { AppConfigService } from '../config/app-config.service';
-import type { MailContent } from './templates/password-reset.mail';
+import type { MailContent } from './templates/mail-content';
 
 /** Sends e-mail through the SMTP server named by SMTP_URL. */
 @Injectable()

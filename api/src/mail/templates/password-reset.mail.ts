@@ -1,22 +1,10 @@
+import escapeHtml from 'escape-html';
+import type { MailContent } from './mail-content';
+
 export interface PasswordResetMailInput {
   name: string;
   resetUrl: string;
   validForMinutes: number;
-}
-
-export interface MailContent {
-  subject: string;
-  text: string;
-  html: string;
-}
-
-function escapeHtml(value: string): string {
-  return value
-    .replace(/&/g, '&amp;')
-    .replace(/</g, '&lt;')
-    .replace(/>/g, '&gt;')
-    .replace(/"/g, '&quot;')
-    .replace(/'/g, '&#39;');
 }
 
 /** The password reset e-mail, as plain text and HTML. */
