@@ -1,5 +1,12 @@
+import * as argon2 from 'argon2';
 import { hash } from 'argon2';
-import { describe, expect, it } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
+
+// The real argon2, with verify observable (to see the dummy check spend a real verification).
+vi.mock('argon2', async (importOriginal) => {
+  const original = await importOriginal<typeof import('argon2')>();
+  return { ...original, verify: vi.fn(original.verify) };
+});
 import { PasswordHasher } from './password-hasher';
 import { ARGON2_OPTIONS } from './password.constants';
 
@@ -44,6 +51,16 @@ describe('PasswordHasher', () => {
   });
 
   it('spends a real verification on unknown accounts', async () => {
-    await expect(hasher.verifyAgainstDummy('whatever')).resolves.toBeUndefined();
+    const verify = vi.mocked(argon2.verify);
+    verify.mockClear();
+    await hasher.verifyAgainstDummy('whatever');
+    expect(verify).toHaveBeenCalledTimes(1);
+    const [stored, password] = verify.mock.calls[0];
+    expect(password).toBe('whatever');
+    // Against a hash made with the full settings, so it costs what a real check costs.
+    const { variant, params } = parsePhc(stored);
+    expect(variant).toBe('argon2id');
+    expect(params.m).toBe(ARGON2_OPTIONS.memoryCost);
+    expect(params.t).toBe(ARGON2_OPTIONS.timeCost);
   });
 });
