@@ -7,7 +7,7 @@ import {
   type NestModule,
   RequestMethod,
 } from '@nestjs/common';
-import { APP_FILTER, APP_GUARD, APP_INTERCEPTOR, APP_PIPE } from '@nestjs/core';
+import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
 import { json, type RequestHandler } from 'express';
 import { LoggerModule } from 'nestjs-pino';
 import { AuthModule } from './auth/auth.module';
@@ -16,7 +16,6 @@ import { HttpSessionService } from './auth/session/http-session.service';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter';
 import { CsrfGuard } from './common/guards/csrf.guard';
 import { RolesGuard } from './common/guards/roles.guard';
-import { NoStoreInterceptor } from './common/interceptors/no-store.interceptor';
 import { createValidationPipe } from './common/pipes/validation.pipe';
 import { requestIdFor } from './common/request-id';
 import { AppConfigModule } from './config/app-config.module';
@@ -108,7 +107,6 @@ function insideNest(handler: RequestHandler): RequestHandler {
     { provide: APP_PIPE, useFactory: createValidationPipe },
     { provide: APP_GUARD, useClass: CsrfGuard },
     { provide: APP_GUARD, useClass: RolesGuard },
-    { provide: APP_INTERCEPTOR, useClass: NoStoreInterceptor },
   ],
 })
 export class AppModule implements NestModule {

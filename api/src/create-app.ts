@@ -1,6 +1,7 @@
 import { NestFactory } from '@nestjs/core';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { DocumentBuilder, SwaggerModule } from '@nestjs/swagger';
+import type { NextFunction, Request, Response } from 'express';
 import helmet from 'helmet';
 import { Logger } from 'nestjs-pino';
 import { AppModule } from './app.module';
@@ -29,6 +30,12 @@ export async function createApp(): Promise<NestExpressApplication> {
   // API answers are no-store: an ETag (a hash of every JSON body) would only cost time. Static
   // files of the web app keep theirs (serve-static sets its own).
   app.set('etag', false);
+  // API answers carry personal data: browsers and proxies must not keep copies. A handler may
+  // replace it (a photo). A plain middleware, not an interceptor: it costs nothing per request.
+  app.use(`/${API_PREFIX}`, (_request: Request, response: Response, next: NextFunction) => {
+    response.setHeader('Cache-Control', 'no-store');
+    next();
+  });
   app.use(
     helmet({
       contentSecurityPolicy: {

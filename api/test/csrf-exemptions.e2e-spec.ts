@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { COMPUTES_ONLY_PATHS } from '../src/common/decorators/computes-only.decorator';
 import { type TestApp, startTestApp } from './support/test-app';
 
 /**
@@ -32,6 +33,10 @@ describe('CSRF exemptions for routes that only compute', () => {
       }
     }
     expect(exempt.sort()).toEqual(['POST /api/planner/options', 'POST /api/quotes/preview']);
+    // The session middleware skips exactly these paths for a request without a session cookie.
+    expect(exempt.map((route) => route.replace(/^POST /, '')).sort()).toEqual(
+      [...COMPUTES_ONLY_PATHS].sort(),
+    );
   });
 
   it('answers the preview without a session or token, and sets no cookie', async () => {
@@ -44,11 +49,17 @@ describe('CSRF exemptions for routes that only compute', () => {
       products.body as { items: { id: string; fit: { verdict: string } }[] }
     ).items.find((item) => item.fit.verdict !== 'does-not-fit');
     expect(tyre).toBeDefined();
+    const sessionsBefore = await testApp.db.query<{ count: string }>(
+      'select count(*) from session',
+    );
     const response = await request(testApp.server)
       .post('/api/quotes/preview')
       .send({ vehicleModelId, uses: ['daily'], items: [{ productId: tyre!.id, quantity: 4 }] })
       .expect(200);
     expect(response.headers['set-cookie']).toBeUndefined();
+    expect(response.headers['cache-control']).toBe('no-store');
+    const sessionsAfter = await testApp.db.query<{ count: string }>('select count(*) from session');
+    expect(sessionsAfter.rows[0].count).toBe(sessionsBefore.rows[0].count);
     expect((response.body as { price: { totalCents: number } }).price.totalCents).toBeGreaterThan(
       0,
     );

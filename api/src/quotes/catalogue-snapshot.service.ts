@@ -11,6 +11,8 @@ import { VehicleModel } from '../vehicles/entities/vehicle-model.entity';
 import { Workshop } from '../workshop/entities/workshop.entity';
 import type { PackageData } from './package-data.loader';
 
+const ignore = (): void => undefined;
+
 /** A read-only copy of what a preview reads, as of one catalogue revision. */
 export interface CatalogueSnapshot {
   revision: string;
@@ -33,6 +35,8 @@ export interface CatalogueSnapshot {
 export class CatalogueSnapshotService {
   private snapshot: CatalogueSnapshot | null = null;
   private loading: Promise<CatalogueSnapshot> | null = null;
+  private revisionRead: Promise<string> | null = null;
+  private nextRevisionRead: Promise<string> | null = null;
 
   constructor(
     private readonly em: EntityManager,
@@ -40,7 +44,42 @@ export class CatalogueSnapshotService {
   ) {}
 
   async current(): Promise<CatalogueSnapshot> {
-    // A named (prepared) statement: parsed once per connection, run on every preview.
+    const revision = await this.revisionNow();
+    if (this.snapshot?.revision === revision) return this.snapshot;
+    // One reload at a time; requests that arrive meanwhile wait for it.
+    this.loading ??= this.load().finally(() => {
+      this.loading = null;
+    });
+    const loaded = await this.loading;
+    // A write may have landed while loading: the snapshot is at least as new as `revision`.
+    return loaded;
+  }
+
+  /**
+   * The revision as of a moment after the caller asked. Callers share reads: one that asks while
+   * a read is in flight (sent, perhaps, before it asked) waits for the next read, which starts
+   * when that one ends, so no answer rests on a read older than its request. Under load that is
+   * one query for a handful of previews instead of one each.
+   */
+  revisionNow(): Promise<string> {
+    if (!this.revisionRead) return this.startRevisionRead();
+    this.nextRevisionRead ??= this.revisionRead.then(ignore, ignore).then(() => {
+      this.nextRevisionRead = null;
+      return this.startRevisionRead();
+    });
+    return this.nextRevisionRead;
+  }
+
+  private startRevisionRead(): Promise<string> {
+    const read = this.readRevision().finally(() => {
+      if (this.revisionRead === read) this.revisionRead = null;
+    });
+    this.revisionRead = read;
+    return read;
+  }
+
+  private async readRevision(): Promise<string> {
+    // A named (prepared) statement: parsed once per connection.
     const result = await this.pool.query<{ revision: string }>({
       name: 'catalogue-revision',
       text: 'select "revision" from "catalogue_revision" where "id" = 1',
@@ -51,14 +90,7 @@ export class CatalogueSnapshotService {
         'The catalogue revision row is missing: run the migrations',
       );
     }
-    if (this.snapshot?.revision === revision) return this.snapshot;
-    // One reload at a time; requests that arrive meanwhile wait for it.
-    this.loading ??= this.load().finally(() => {
-      this.loading = null;
-    });
-    const loaded = await this.loading;
-    // A write may have landed while loading: the snapshot is at least as new as `revision`.
-    return loaded;
+    return revision;
   }
 
   /** What `QuotePackagesService` needs for one package, from the snapshot. */

@@ -1,16 +1,14 @@
-import { Body, Controller, HttpCode, HttpStatus, Post, UseInterceptors } from '@nestjs/common';
+import { Body, Controller, HttpCode, HttpStatus, Post } from '@nestjs/common';
 import { ApiBadRequestResponse, ApiOkResponse, ApiOperation, ApiTags } from '@nestjs/swagger';
 import { ComputesOnly } from '../common/decorators/computes-only.decorator';
 import { Public } from '../common/decorators/public.decorator';
 import { ErrorResponse } from '../common/filters/error.response';
-import { ArrayIndexKeysInterceptor } from './array-index-keys.interceptor';
 import { PlannerOptionsDto } from './dto/planner-options.dto';
 import { PlannerOptionsResponse } from './dto/planner-options.response';
 import { PlannerService } from './planner.service';
 
 @ApiTags('planner')
 @Controller('planner')
-@UseInterceptors(ArrayIndexKeysInterceptor)
 export class PlannerController {
   constructor(private readonly planner: PlannerService) {}
 

@@ -1,5 +1,4 @@
 import { describe, expect, it } from 'vitest';
-import { withIndexBrackets } from './array-index-keys.interceptor';
 import {
   quoteNumberFromSearch,
   quotePdfFileName,
@@ -21,23 +20,5 @@ describe('quote references', () => {
     expect(quoteNumberFromSearch(' 123 ')).toBe(123);
     expect(quoteNumberFromSearch('Robin')).toBeNull();
     expect(quoteNumberFromSearch('ABC123')).toBeNull();
-  });
-});
-
-describe('field error keys of list items', () => {
-  it('writes list positions in brackets, leaving other keys alone', () => {
-    expect(
-      withIndexBrackets({
-        'items.2.quantity': ['must be 1 or more'],
-        'items.10.productId': ['must be a UUID'],
-        items: ['a package holds one wheel, not 2'],
-        'deposit.capCents': ['must not be below deposit.floorCents'],
-      }),
-    ).toEqual({
-      'items[2].quantity': ['must be 1 or more'],
-      'items[10].productId': ['must be a UUID'],
-      items: ['a package holds one wheel, not 2'],
-      'deposit.capCents': ['must not be below deposit.floorCents'],
-    });
   });
 });

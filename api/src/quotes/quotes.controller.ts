@@ -8,7 +8,6 @@ import {
   Post,
   Query,
   StreamableFile,
-  UseInterceptors,
 } from '@nestjs/common';
 import {
   ApiBadRequestResponse,
@@ -27,7 +26,6 @@ import { Roles } from '../common/decorators/roles.decorator';
 import { IdParams } from '../common/dto/id.params';
 import { ErrorResponse } from '../common/filters/error.response';
 import type { User } from '../users/entities/user.entity';
-import { ArrayIndexKeysInterceptor } from './array-index-keys.interceptor';
 import { CreateQuoteDto } from './dto/create-quote.dto';
 import { QuoteListQueryDto } from './dto/quote-list-query.dto';
 import { QuotePackageDto } from './dto/quote-package.dto';
@@ -39,7 +37,6 @@ import { QuotesService } from './quotes.service';
 
 @ApiTags('quotes')
 @Controller('quotes')
-@UseInterceptors(ArrayIndexKeysInterceptor)
 export class QuotesController {
   constructor(private readonly quotes: QuotesService) {}
 

@@ -1,16 +1,28 @@
 import { Inject, Injectable, Logger, type OnApplicationShutdown } from '@nestjs/common';
-import connectPgSimple from 'connect-pg-simple';
 import type { Request, RequestHandler } from 'express';
 import session from 'express-session';
 import passport from 'passport';
 import type { Pool } from 'pg';
+import { COMPUTES_ONLY_PATHS } from '../../common/decorators/computes-only.decorator';
 import { AppConfigService } from '../../config/app-config.service';
 import { PG_POOL } from '../../database/pg-pool.module';
+import { ThrottledTouchPgStore } from './throttled-touch-pg-store';
 
 export const SESSION_COOKIE_NAME = 'lw.sid';
 export const SESSION_TABLE = 'session';
 
-const PgStore = connectPgSimple(session);
+/** A request to a compute-only route that brings no session: it needs none. */
+function needsNoSession(request: Request): boolean {
+  if (request.headers.cookie?.includes(`${SESSION_COOKIE_NAME}=`)) return false;
+  const url = request.originalUrl;
+  const query = url.indexOf('?');
+  return COMPUTES_ONLY_PATHS.has(query === -1 ? url : url.slice(0, query));
+}
+
+function unlessSessionless(handler: RequestHandler): RequestHandler {
+  return (request, response, next) =>
+    needsNoSession(request) ? next() : handler(request, response, next);
+}
 
 function promisify(action: (done: (error?: unknown) => void) => void): Promise<void> {
   return new Promise((resolve, reject) => action((error) => (error ? reject(error) : resolve())));
@@ -25,13 +37,13 @@ function promisify(action: (done: (error?: unknown) => void) => void): Promise<v
 @Injectable()
 export class HttpSessionService implements OnApplicationShutdown {
   private readonly logger = new Logger(HttpSessionService.name);
-  private readonly store: InstanceType<typeof PgStore>;
+  private readonly store: ThrottledTouchPgStore;
 
   constructor(
     private readonly config: AppConfigService,
     @Inject(PG_POOL) private readonly pool: Pool,
   ) {
-    this.store = new PgStore({
+    this.store = new ThrottledTouchPgStore({
       pool,
       tableName: SESSION_TABLE,
       createTableIfMissing: false,
@@ -49,7 +61,10 @@ export class HttpSessionService implements OnApplicationShutdown {
     };
   }
 
-  /** The middleware chain, in order: session, absolute lifetime, passport. */
+  /**
+   * The middleware chain, in order: session, absolute lifetime, passport. Each step is skipped for
+   * a request to a compute-only route that brings no session cookie (it answers a guest anyway).
+   */
   middleware(): RequestHandler[] {
     const sessionMiddleware = session({
       name: SESSION_COOKIE_NAME,
@@ -67,7 +82,9 @@ export class HttpSessionService implements OnApplicationShutdown {
       if (createdAtMs === undefined || Date.now() - createdAtMs <= maxAgeMs) return next();
       request.session.regenerate((error) => next(error));
     };
-    return [sessionMiddleware, absoluteLifetime, passport.initialize(), passport.session()];
+    return [sessionMiddleware, absoluteLifetime, passport.initialize(), passport.session()].map(
+      unlessSessionless,
+    );
   }
 
   /** Marks a fresh session (after sign-in or register) with its creation time. */

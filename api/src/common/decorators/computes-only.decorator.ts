@@ -11,3 +11,13 @@ export const COMPUTES_ONLY_KEY = 'liftwright:computesOnly';
  */
 export const ComputesOnly = () =>
   applyDecorators(SetMetadata(COMPUTES_ONLY_KEY, true), ApiExtension('x-computes-only', true));
+
+/**
+ * The paths of the @ComputesOnly() routes. A request to one of them without a session cookie
+ * skips the session middleware altogether: it would only make up a session and throw it away.
+ * The CSRF test checks that this list and the decorated routes agree.
+ */
+export const COMPUTES_ONLY_PATHS: ReadonlySet<string> = new Set([
+  '/api/planner/options',
+  '/api/quotes/preview',
+]);

@@ -1,5 +1,5 @@
 import { Type } from 'class-transformer';
-import { IsEmail, IsInt, Min, ValidateNested } from 'class-validator';
+import { IsEmail, IsInt, IsOptional, Min, ValidateNested } from 'class-validator';
 import { describe, expect, it } from 'vitest';
 import { FieldErrorsException } from '../errors/field-errors.exception';
 import { createValidationPipe } from './validation.pipe';
@@ -17,6 +17,11 @@ class VehicleDto {
   @ValidateNested()
   @Type(() => AxleDto)
   frontAxle!: AxleDto;
+
+  @IsOptional()
+  @ValidateNested({ each: true })
+  @Type(() => AxleDto)
+  extraAxles?: AxleDto[];
 }
 
 async function fieldErrorsOf(value: unknown): Promise<Record<string, string[]>> {
@@ -35,6 +40,16 @@ describe('createValidationPipe', () => {
       ownerEmail: ['must be an e-mail address'],
       'frontAxle.ratingKg': ['must not be negative'],
     });
+  });
+
+  it('keys list items with their position in brackets, "a[2].b"', async () => {
+    expect(
+      await fieldErrorsOf({
+        ownerEmail: 'a@b.example',
+        frontAxle: { ratingKg: 1 },
+        extraAxles: [{ ratingKg: 1 }, { ratingKg: 1 }, { ratingKg: -1 }],
+      }),
+    ).toEqual({ 'extraAxles[2].ratingKg': ['must not be negative'] });
   });
 
   it('names unknown properties, nested ones too', async () => {

@@ -8,11 +8,20 @@ function withoutPropertyName(message: string, property: string): string {
   return message.startsWith(`${property} `) ? message.slice(property.length + 1) : message;
 }
 
-/** Flattens class-validator errors into { "a.b": [messages] }. */
+/** The key of a nested field: `a.b` for an object's property, `items[2]` for a list position. */
+function childPath(parentPath: string, property: string): string {
+  if (!parentPath) return property;
+  return /^\d+$/.test(property) ? `${parentPath}[${property}]` : `${parentPath}.${property}`;
+}
+
+/**
+ * Flattens class-validator errors into { "a.b": [messages], "items[2].quantity": [messages] }:
+ * list positions in brackets, as the services write them, so a client handles one form.
+ */
 export function toFieldErrors(errors: ValidationError[], parentPath = ''): FieldErrors {
   const fieldErrors: FieldErrors = {};
   for (const error of errors) {
-    const path = parentPath ? `${parentPath}.${error.property}` : error.property;
+    const path = childPath(parentPath, error.property);
     const messages = Object.entries(error.constraints ?? {}).map(([rule, message]) =>
       rule === 'whitelistValidation'
         ? UNKNOWN_FIELD_MESSAGE
