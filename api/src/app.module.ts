@@ -10,6 +10,7 @@ import {
 import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
 import { json, type RequestHandler } from 'express';
 import { LoggerModule } from 'nestjs-pino';
+import { BookingsModule } from './bookings/bookings.module';
 import { AuthModule } from './auth/auth.module';
 import { CatalogueModule } from './catalogue/catalogue.module';
 import { HttpSessionService } from './auth/session/http-session.service';
@@ -101,6 +102,7 @@ function insideNest(handler: RequestHandler): RequestHandler {
     QuotesModule,
     UploadsModule,
     CustomersModule,
+    BookingsModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },

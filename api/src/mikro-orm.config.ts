@@ -2,6 +2,8 @@ import { join } from 'node:path';
 import { Migrator } from '@mikro-orm/migrations';
 import { defineConfig, type Options } from '@mikro-orm/postgresql';
 import { SeedManager } from '@mikro-orm/seeder';
+import { Booking } from './bookings/entities/booking.entity';
+import { Reservation } from './bookings/entities/reservation.entity';
 import { AuthThrottleCounter } from './auth/entities/auth-throttle-counter.entity';
 import { HttpSession } from './auth/entities/http-session.entity';
 import { PasswordResetToken } from './auth/entities/password-reset-token.entity';
@@ -18,6 +20,10 @@ import { Upload } from './uploads/entities/upload.entity';
 import { User } from './users/entities/user.entity';
 import { StockWheel } from './vehicles/entities/stock-wheel.embeddable';
 import { VehicleModel } from './vehicles/entities/vehicle-model.entity';
+import { Bay } from './workshop/entities/bay.entity';
+import { Closure } from './workshop/entities/closure.entity';
+import { HolidayOverride } from './workshop/entities/holiday-override.entity';
+import { OpeningHours } from './workshop/entities/opening-hours.entity';
 import { Workshop } from './workshop/entities/workshop.entity';
 
 /**
@@ -45,6 +51,12 @@ export function createOrmConfig(databaseUrl: string, { writeSnapshot = true } = 
       QuoteVersion,
       QuoteLine,
       Upload,
+      Bay,
+      OpeningHours,
+      Closure,
+      HolidayOverride,
+      Booking,
+      Reservation,
     ],
     forceUtcTimezone: true,
     ensureDatabase: false,

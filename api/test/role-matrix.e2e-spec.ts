@@ -78,6 +78,22 @@ const INTENDED_ACCESS: Record<string, Principal[]> = {
   'DELETE /api/uploads/:id': ['customer', 'desk', 'manager'],
   'GET /api/customers': ['desk', 'manager'],
   'POST /api/customers': ['desk', 'manager'],
+  // Issue 5: workshop set-up (Manage → Workshop): the desk reads, the manager changes.
+  'GET /api/workshop/setup': ['desk', 'manager'],
+  'PUT /api/workshop/calendar': ['manager'],
+  'POST /api/workshop/bays': ['manager'],
+  'PATCH /api/workshop/bays/:id': ['manager'],
+  'POST /api/workshop/closures': ['manager'],
+  'DELETE /api/workshop/closures/:id': ['manager'],
+  'PUT /api/workshop/holidays/:date': ['manager'],
+  // Issue 5: availability and bookings (a customer's own; the desk and the manager every one).
+  'GET /api/availability': ['customer', 'desk', 'manager'],
+  'POST /api/bookings': ['customer', 'desk', 'manager'],
+  'GET /api/bookings': ['customer', 'desk', 'manager'],
+  'GET /api/bookings/:id': ['customer', 'desk', 'manager'],
+  'POST /api/bookings/:id/move': ['customer', 'desk', 'manager'],
+  'POST /api/bookings/:id/cancel': ['customer', 'desk', 'manager'],
+  'POST /api/bookings/:id/move-request': ['customer'],
 };
 
 function sorted(principals: Principal[]): string {

@@ -53,6 +53,10 @@ export class AppConfigService {
     return this.config.get('LOG_LEVEL', { infer: true });
   }
 
+  get holdSweepMs(): number {
+    return this.config.get('HOLD_SWEEP_SECONDS', { infer: true }) * 1000;
+  }
+
   get sessionIdleMs(): number {
     return this.config.get('SESSION_IDLE_MINUTES', { infer: true }) * 60_000;
   }

@@ -26,6 +26,7 @@ describe('validateEnvironment', () => {
       LOG_LEVEL: 'info',
       SESSION_IDLE_MINUTES: 30,
       SESSION_MAX_HOURS: 12,
+      HOLD_SWEEP_SECONDS: 60,
       TRUST_PROXY: false,
     });
     expect(environment.WEB_DIST_DIR).toBeUndefined();
@@ -39,6 +40,7 @@ describe('validateEnvironment', () => {
       PORT: '8080',
       SESSION_IDLE_MINUTES: '5',
       SESSION_MAX_HOURS: '1',
+      HOLD_SWEEP_SECONDS: '5',
       TRUST_PROXY: 'true',
       NODE_ENV: 'production',
     });
@@ -46,6 +48,7 @@ describe('validateEnvironment', () => {
       PORT: 8080,
       SESSION_IDLE_MINUTES: 5,
       SESSION_MAX_HOURS: 1,
+      HOLD_SWEEP_SECONDS: 5,
       TRUST_PROXY: true,
     });
   });

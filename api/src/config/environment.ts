@@ -172,6 +172,13 @@ export class Environment extends DatabaseEnvironment {
   @Max(720, { message: '$property must be a whole number of hours between 1 and 720' })
   SESSION_MAX_HOURS = 12;
 
+  /** How often lapsed holds are marked expired and their bays released. */
+  @Transform(toWholeNumber)
+  @IsInt({ message: '$property must be a whole number of seconds between 1 and 3600' })
+  @Min(1, { message: '$property must be a whole number of seconds between 1 and 3600' })
+  @Max(3600, { message: '$property must be a whole number of seconds between 1 and 3600' })
+  HOLD_SWEEP_SECONDS = 60;
+
   @Transform(toBoolean)
   @IsBoolean({ message: '$property must be true or false' })
   TRUST_PROXY = false;
@@ -223,6 +230,7 @@ const ENVIRONMENT_KEYS = [
   'LOG_LEVEL',
   'SESSION_IDLE_MINUTES',
   'SESSION_MAX_HOURS',
+  'HOLD_SWEEP_SECONDS',
   'TRUST_PROXY',
   'UPLOAD_DIR',
 ] as const;

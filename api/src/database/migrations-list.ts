@@ -3,6 +3,7 @@ import { Migration20261201220656 } from './migrations/Migration20261201220656';
 import { Migration20261201225254 } from './migrations/Migration20261201225254';
 import { Migration20261202014939 } from './migrations/Migration20261202014939';
 import { Migration20261202025114 } from './migrations/Migration20261202025114';
+import { Migration20261202063421 } from './migrations/Migration20261202063421';
 
 /**
  * Every migration, oldest first. Listed explicitly (rather than found by a file glob) so the same
@@ -14,4 +15,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261201225254', class: Migration20261201225254 },
   { name: 'Migration20261202014939', class: Migration20261202014939 },
   { name: 'Migration20261202025114', class: Migration20261202025114 },
+  { name: 'Migration20261202063421', class: Migration20261202063421 },
 ];

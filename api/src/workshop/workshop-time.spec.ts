@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { endOfLocalDay, isKnownTimeZone, localDateOf, longDate } from './workshop-time';
+import {
+  addCalendarMonths,
+  canonicalTimeZone,
+  endOfLocalDay,
+  isKnownTimeZone,
+  localDateOf,
+  longDate,
+  todayLocalDate,
+} from './workshop-time';
 
 describe('workshop time zone helpers', () => {
   it('reads the local calendar date of an instant, not the UTC one', () => {
@@ -60,5 +68,31 @@ describe('workshop time zone helpers', () => {
     expect(() => localDateOf(new Date(), 'Nowhere/Tallowgate')).toThrow(RangeError);
     expect(isKnownTimeZone('Australia/Sydney')).toBe(true);
     expect(isKnownTimeZone('Nowhere/Tallowgate')).toBe(false);
+  });
+
+  it('takes only zones of the IANA database, spelt as it spells them', () => {
+    // Source: IANA tz database, zone.tab (Australia/Sydney, Pacific/Auckland) and backward
+    // (Asia/Calcutta, a link to Asia/Kolkata).
+    expect(isKnownTimeZone('Pacific/Auckland')).toBe(true);
+    expect(isKnownTimeZone('Asia/Calcutta')).toBe(true);
+    // luxon's names for the server's own zone and a fixed offset are not IANA zones.
+    expect(isKnownTimeZone('local')).toBe(false);
+    expect(isKnownTimeZone('system')).toBe(false);
+    expect(isKnownTimeZone('UTC+10')).toBe(false);
+    expect(isKnownTimeZone('')).toBe(false);
+    expect(canonicalTimeZone('australia/sydney')).toBe('Australia/Sydney');
+    expect(canonicalTimeZone('Pacific/Auckland')).toBe('Pacific/Auckland');
+  });
+
+  it('counts months across month and year ends', () => {
+    // Source: Gregorian calendar: January has 31 days, February 2027 has 28.
+    expect(addCalendarMonths('2026-12-02', 12)).toBe('2027-12-02');
+    expect(addCalendarMonths('2027-01-31', 1)).toBe('2027-02-28');
+  });
+
+  it("gives today's date in the zone", () => {
+    // Source: IANA tz database, Pacific/Auckland: NZDT (UTC+13) in December.
+    expect(todayLocalDate('Pacific/Auckland', new Date('2026-12-02T11:30:00Z'))).toBe('2026-12-03');
+    expect(todayLocalDate('Pacific/Auckland', new Date('2026-12-02T10:30:00Z'))).toBe('2026-12-02');
   });
 });

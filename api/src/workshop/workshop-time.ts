@@ -3,7 +3,7 @@
  * is issued on the workshop's local date and holds its prices to the end of its last local day,
  * whatever the server's own zone and across daylight-saving changes.
  */
-import { DateTime } from 'luxon';
+import { DateTime, IANAZone } from 'luxon';
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 
@@ -16,9 +16,28 @@ function zoned(date: string, timeZone: string): DateTime {
   return local;
 }
 
-/** True for a time zone luxon (the ICU data of Node) knows, e.g. Australia/Sydney. */
+/**
+ * True for a zone of the IANA time zone database that luxon (the ICU data of Node) knows, e.g.
+ * Australia/Sydney. luxon's own words for the server's zone ('local', 'system') and fixed offsets
+ * ('UTC+10') are not zones a workshop is in.
+ */
 export function isKnownTimeZone(timeZone: string): boolean {
-  return DateTime.now().setZone(timeZone).isValid;
+  return IANAZone.isValidZone(timeZone) && DateTime.now().setZone(timeZone).isValid;
+}
+
+/** The zone's name as the IANA database spells it ('australia/sydney' → 'Australia/Sydney'). */
+export function canonicalTimeZone(timeZone: string): string {
+  return new Intl.DateTimeFormat('en-AU', { timeZone }).resolvedOptions().timeZone;
+}
+
+/** The calendar date `months` months after a YYYY-MM-DD date (31 January + 1 → 28/29 February). */
+export function addCalendarMonths(date: string, months: number): string {
+  return zoned(date, 'UTC').plus({ months }).toISODate() as string;
+}
+
+/** Today's calendar date (YYYY-MM-DD) in the time zone. */
+export function todayLocalDate(timeZone: string, now: Date = new Date()): string {
+  return localDateOf(now, timeZone);
 }
 
 /**

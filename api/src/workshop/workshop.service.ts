@@ -1,3 +1,4 @@
+import { LockMode } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable, InternalServerErrorException } from '@nestjs/common';
 import { FieldErrorsException } from '../common/errors/field-errors.exception';
@@ -17,9 +18,28 @@ export interface WorkshopSettings {
 }
 
 /**
- * The one workshop row: its card and its pricing policy. Read per request (several API
- * processes may serve the shop, so nothing is cached in memory).
+ * The one workshop row (the oldest, should a second ever appear). With `forUpdate`, inside a
+ * transaction: locked until it ends, so set-up changes made at the same time run one after the
+ * other.
  */
+export async function loadWorkshop(em: EntityManager, forUpdate = false): Promise<Workshop> {
+  const [workshop] = await em.find(
+    Workshop,
+    {},
+    {
+      orderBy: { createdAt: 'asc', id: 'asc' },
+      limit: 1,
+      ...(forUpdate ? { lockMode: LockMode.PESSIMISTIC_WRITE } : {}),
+    },
+  );
+  if (!workshop) {
+    throw new InternalServerErrorException(
+      'The workshop is not set up: run the database seed first',
+    );
+  }
+  return workshop;
+}
+
 /** The card, policy and time zone of a workshop row already loaded. */
 export function settingsOf(workshop: Workshop): WorkshopSettings {
   return {
@@ -29,6 +49,10 @@ export function settingsOf(workshop: Workshop): WorkshopSettings {
   };
 }
 
+/**
+ * The one workshop row: its card and its pricing policy. Read per request (several API
+ * processes may serve the shop, so nothing is cached in memory).
+ */
 @Injectable()
 export class WorkshopService {
   constructor(private readonly em: EntityManager) {}
@@ -88,18 +112,7 @@ export class WorkshopService {
     return endOfLocalDay(date, (await this.load()).timeZone);
   }
 
-  private async load(): Promise<Workshop> {
-    // One row by design; the oldest wins should a second ever appear.
-    const [workshop] = await this.em.find(
-      Workshop,
-      {},
-      { orderBy: { createdAt: 'asc', id: 'asc' }, limit: 1 },
-    );
-    if (!workshop) {
-      throw new InternalServerErrorException(
-        'The workshop is not set up: run the database seed first',
-      );
-    }
-    return workshop;
+  private load(): Promise<Workshop> {
+    return loadWorkshop(this.em);
   }
 }

@@ -468,6 +468,125 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  '/api/workshop/setup': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** Calendar settings, the week’s hours, bays, closures, public holidays of the next 12 months */
+    get: operations['WorkshopSetupController_read'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/workshop/calendar': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    /** Replace the time zone, holiday region, booking settings and the 7 days of hours */
+    put: operations['WorkshopSetupController_updateCalendar'];
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/workshop/bays': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Add a bay (switched on, placed last) */
+    post: operations['WorkshopSetupController_createBay'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/workshop/bays/{id}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    /** Rename a bay, change its kind, move it in the order, switch it on or off */
+    patch: operations['WorkshopSetupController_updateBay'];
+    trace?: never;
+  };
+  '/api/workshop/closures': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Shut the workshop from one date to another (both included) */
+    post: operations['WorkshopSetupController_createClosure'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/workshop/closures/{id}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    post?: never;
+    /** Remove a closure */
+    delete: operations['WorkshopSetupController_deleteClosure'];
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/workshop/holidays/{date}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    /** Open on a public holiday anyway (usual hours), or stay shut on it (the default) */
+    put: operations['WorkshopSetupController_setHoliday'];
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   '/api/quotes/preview': {
     parameters: {
       query?: never;
@@ -670,6 +789,109 @@ export interface paths {
     put?: never;
     /** Create a customer for a walk-in quote; they get an e-mail with a link to choose a password */
     post: operations['CustomersController_create'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/availability': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** Start times that fit a quote version: per day, each with its bay segments (workshop zone and UTC) */
+    get: operations['BookingsController_availability'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/bookings': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** Bookings, newest first (a customer's own; every booking for the desk) */
+    get: operations['BookingsController_list'];
+    put?: never;
+    /** Hold a start time for a quote version (state held, until holdExpiresAt) */
+    post: operations['BookingsController_hold'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/bookings/{id}': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    /** One booking (another customer's is 404) */
+    get: operations['BookingsController_get'];
+    put?: never;
+    post?: never;
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/bookings/{id}/move': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Move to another start: all reservations at once or nothing (the customer while held; the desk while held, requested or confirmed) */
+    post: operations['BookingsController_move'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/bookings/{id}/cancel': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Cancel (or release a hold): the bays are freed */
+    post: operations['BookingsController_cancel'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/bookings/{id}/move-request': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Ask the workshop to move a requested or confirmed booking */
+    post: operations['BookingsController_requestMove'];
     delete?: never;
     options?: never;
     head?: never;
@@ -1765,6 +1987,192 @@ export interface components {
       /** @example 30 */
       quoteValidDays: number;
     };
+    OpeningHoursEntryResponse: {
+      /**
+       * @description ISO weekday: 1 = Monday
+       * @example 1
+       */
+      weekday: number;
+      open: boolean;
+      /** @example 07:30 */
+      opensAt: string | null;
+      /** @example 17:00 */
+      closesAt: string | null;
+      /** @example 12:00 */
+      breakStartsAt: string | null;
+      /** @example 12:30 */
+      breakEndsAt: string | null;
+    };
+    BayResponse: {
+      /** Format: uuid */
+      id: string;
+      /** @example Hoist 1 */
+      name: string;
+      kind: components['schemas']['BayKind'];
+      /**
+       * @description Order on screens and in bay choice (1 first)
+       * @example 1
+       */
+      position: number;
+      /** @description False: switched off, offered for no new bookings */
+      active: boolean;
+    };
+    ClosureResponse: {
+      /** Format: uuid */
+      id: string;
+      /**
+       * Format: date
+       * @example 2027-01-04
+       */
+      startDate: string;
+      /**
+       * Format: date
+       * @example 2027-01-08
+       */
+      endDate: string;
+      /** @example Stocktake */
+      reason: string;
+    };
+    HolidayResponse: {
+      /**
+       * Format: date
+       * @example 2026-12-25
+       */
+      date: string;
+      /** @example Christmas Day */
+      name: string;
+      /** @description True: the workshop opens on this day with its usual hours */
+      opens: boolean;
+      note: string | null;
+    };
+    HolidayRegionResponse: {
+      /** @example AU-NSW */
+      code: string;
+      /** @example Australia, New South Wales */
+      name: string;
+    };
+    WorkshopSetupResponse: {
+      /**
+       * @description IANA time zone of the workshop
+       * @example Australia/Sydney
+       */
+      timeZone: string;
+      /**
+       * @description Public holidays come from this region
+       * @example AU-NSW
+       */
+      holidayRegion: string;
+      /**
+       * @description Start times are offered every this many minutes
+       * @example 30
+       */
+      slotStepMinutes: number;
+      /**
+       * @description How long a held time is kept for the customer
+       * @example 15
+       */
+      holdMinutes: number;
+      /**
+       * @description Calendar days added after the longest lead time of special-order parts
+       * @example 1
+       */
+      leadTimeBufferDays: number;
+      /**
+       * @description Bay minutes to mount, balance and fit one wheel
+       * @example 15
+       */
+      fittingMinutesPerWheel: number;
+      /** @description Always 7, Monday first */
+      openingHours: components['schemas']['OpeningHoursEntryResponse'][];
+      /** @description By position */
+      bays: components['schemas']['BayResponse'][];
+      /** @description Closures not yet over (ending today or later), by start date */
+      closures: components['schemas']['ClosureResponse'][];
+      /** @description Public holidays of the next 12 months from the workshop's today, by date */
+      holidays: components['schemas']['HolidayResponse'][];
+      holidayRegions: components['schemas']['HolidayRegionResponse'][];
+    };
+    OpeningHoursEntryDto: {
+      /**
+       * @description ISO weekday: 1 = Monday
+       * @example 1
+       */
+      weekday: number;
+      open: boolean;
+      /** @example 07:30 */
+      opensAt?: string | null;
+      /** @example 17:00 */
+      closesAt?: string | null;
+      /** @example 12:00 */
+      breakStartsAt?: string | null;
+      /** @example 12:30 */
+      breakEndsAt?: string | null;
+    };
+    UpdateWorkshopCalendarDto: {
+      /**
+       * @description IANA time zone
+       * @example Australia/Sydney
+       */
+      timeZone: string;
+      /**
+       * @description A code from holidayRegions
+       * @example AU-NSW
+       */
+      holidayRegion: string;
+      /**
+       * @example 30
+       * @enum {number}
+       */
+      slotStepMinutes: 10 | 15 | 20 | 30 | 60;
+      /** @example 15 */
+      holdMinutes: number;
+      /** @example 1 */
+      leadTimeBufferDays: number;
+      /** @example 15 */
+      fittingMinutesPerWheel: number;
+      openingHours: components['schemas']['OpeningHoursEntryDto'][];
+    };
+    CreateBayDto: {
+      /**
+       * @description Unique
+       * @example Hoist 4
+       */
+      name: string;
+      kind: components['schemas']['BayKind'];
+    };
+    UpdateBayDto: {
+      /** @example Hoist 4 */
+      name?: string;
+      kind?: components['schemas']['BayKind'];
+      /**
+       * @description The place to move the bay to (1 first, at most the number of bays)
+       * @example 2
+       */
+      position?: number;
+      /** @description False: switched off (refused while it has bookings ahead) */
+      active?: boolean;
+    };
+    CreateClosureDto: {
+      /**
+       * Format: date
+       * @example 2027-01-04
+       */
+      startDate: string;
+      /**
+       * Format: date
+       * @description Not before startDate
+       * @example 2027-01-08
+       */
+      endDate: string;
+      /** @example Stocktake */
+      reason: string;
+    };
+    HolidayOverrideDto: {
+      /** @description True: open with the usual hours; false: closed (the default) */
+      opens: boolean;
+      /** @description Kept while the workshop opens on the day */
+      note?: string | null;
+    };
     /** @enum {string} */
     VehicleUse: 'daily' | 'touring' | 'towing' | 'off-road';
     QuoteItemDto: {
@@ -2167,6 +2575,153 @@ export interface components {
       name: string;
       /** @example customer@liftwright.example */
       email: string;
+    };
+    JobSegmentResponse: {
+      bayKind: components['schemas']['BayKind'];
+      /** @description Working minutes in a bay of this kind */
+      minutes: number;
+      /** @description The work done there, in line order */
+      descriptions: string[];
+    };
+    JobPlanResponse: {
+      /** @description In order; the next starts as one ends */
+      segments: components['schemas']['JobSegmentResponse'][];
+      totalMinutes: number;
+      /** @description The longest lead time of the special-order parts (0: all on the shelf) */
+      longestLeadDays: number;
+      /**
+       * @description Local date: no start before it
+       * @example 2026-12-03
+       */
+      earliestStartDate: string;
+    };
+    PlannedSegmentResponse: {
+      /** Format: uuid */
+      bayId: string;
+      /** @example Hoist 1 */
+      bayName: string;
+      bayKind: components['schemas']['BayKind'];
+      /** @description Working minutes in the bay (the stay may be longer: breaks, nights) */
+      minutes: number;
+      /**
+       * @description In the workshop's zone
+       * @example 2026-12-03T07:30:00+11:00
+       */
+      start: string;
+      /** @example 2026-12-02T20:30:00.000Z */
+      startUtc: string;
+      /** @example 2026-12-03T11:00:00+11:00 */
+      end: string;
+      /** @example 2026-12-03T00:00:00.000Z */
+      endUtc: string;
+    };
+    StartOptionResponse: {
+      /** @example 2026-12-03T07:30:00+11:00 */
+      start: string;
+      /** Format: date-time */
+      startUtc: string;
+      /** @example 07:30 */
+      localTime: string;
+      end: string;
+      /** Format: date-time */
+      endUtc: string;
+      segments: components['schemas']['PlannedSegmentResponse'][];
+    };
+    AvailabilityDayResponse: {
+      /** @example 2026-12-03 */
+      date: string;
+      /** @example Public holiday: Christmas Day */
+      closedReason: string | null;
+      starts: components['schemas']['StartOptionResponse'][];
+    };
+    AvailabilityResponse: {
+      /** Format: uuid */
+      quoteVersionId: string;
+      /** @example Australia/Sydney */
+      timeZone: string;
+      /** @description How long a chosen time is held */
+      holdMinutes: number;
+      plan: components['schemas']['JobPlanResponse'];
+      days: components['schemas']['AvailabilityDayResponse'][];
+    };
+    CreateBookingDto: {
+      /** Format: uuid */
+      quoteVersionId: string;
+      /**
+       * @description One of the offered starts
+       * @example 2026-12-02T20:30:00.000Z
+       */
+      start: string;
+    };
+    /** @enum {string} */
+    BookingState:
+      'held' | 'requested' | 'confirmed' | 'in-progress' | 'completed' | 'cancelled' | 'expired';
+    BookingQuoteSummaryResponse: {
+      /** Format: uuid */
+      id: string;
+      /** @example Q-000123 */
+      reference: string;
+      /** Format: uuid */
+      versionId: string;
+      versionNumber: number;
+      /** @description Integer cents */
+      totalCents: number;
+      /** @description Integer cents */
+      depositCents: number;
+      /** @example Oskerra Barrow GLX dual cab */
+      vehicleName: string;
+    };
+    BookingCustomerResponse: {
+      /** Format: uuid */
+      id: string;
+      name: string;
+      email: string;
+    };
+    MoveRequestResponse: {
+      note: string;
+      /** Format: date-time */
+      requestedAt: string;
+    };
+    BookingResponse: {
+      /** Format: uuid */
+      id: string;
+      /** @example B-000042 */
+      reference: string;
+      state: components['schemas']['BookingState'];
+      /** Format: date-time */
+      holdExpiresAt: string | null;
+      /** @example 2026-12-03T07:30:00+11:00 */
+      start: string;
+      /** Format: date-time */
+      startUtc: string;
+      end: string;
+      /** Format: date-time */
+      endUtc: string;
+      /** @example Australia/Sydney */
+      timeZone: string;
+      segments: components['schemas']['PlannedSegmentResponse'][];
+      quote: components['schemas']['BookingQuoteSummaryResponse'];
+      customer: components['schemas']['BookingCustomerResponse'];
+      moveRequest: components['schemas']['MoveRequestResponse'] | null;
+      /** Format: date-time */
+      createdAt: string;
+    };
+    BookingConflictResponse: {
+      statusCode: number;
+      message: string;
+      /** @description Up to 5 later starts that fit */
+      nextStarts: components['schemas']['StartOptionResponse'][];
+    };
+    BookingListResponse: {
+      items: components['schemas']['BookingResponse'][];
+    };
+    MoveBookingDto: {
+      /** @example 2026-12-02T20:30:00.000Z */
+      start: string;
+    };
+    MoveRequestDto: {
+      /** @example Could it be the Thursday after? */
+      note: string;
     };
   };
   responses: never;
@@ -3904,6 +4459,361 @@ export interface operations {
       };
     };
   };
+  WorkshopSetupController_read: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WorkshopSetupResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  WorkshopSetupController_updateCalendar: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateWorkshopCalendarDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WorkshopSetupResponse'];
+        };
+      };
+      /** @description fieldErrors keyed like the body (e.g. "openingHours[2].closesAt"); nothing changed */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  WorkshopSetupController_createBay: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateBayDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WorkshopSetupResponse'];
+        };
+      };
+      /** @description Invalid fields or a name already taken */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  WorkshopSetupController_updateBay: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['UpdateBayDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WorkshopSetupResponse'];
+        };
+      };
+      /** @description Invalid fields or a name already taken */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Switching off, or changing the kind of, a bay with bookings ahead */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  WorkshopSetupController_createClosure: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateClosureDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WorkshopSetupResponse'];
+        };
+      };
+      /** @description fieldErrors keyed like the body (e.g. "openingHours[2].closesAt"); nothing changed */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  WorkshopSetupController_deleteClosure: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WorkshopSetupResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  WorkshopSetupController_setHoliday: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        date: string;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['HolidayOverrideDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WorkshopSetupResponse'];
+        };
+      };
+      /** @description fieldErrors.date when the date is no public holiday of the region */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
   QuotesController_preview: {
     parameters: {
       query?: never;
@@ -4694,6 +5604,365 @@ export interface operations {
         };
       };
       /** @description E-mail already registered */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_availability: {
+    parameters: {
+      query: {
+        quoteVersionId: string;
+        /** @description Default: the workshop's today */
+        from?: string;
+        days?: number;
+      };
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['AvailabilityResponse'];
+        };
+      };
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description The version cannot be booked (expired, replaced…) */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_list: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingListResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_hold: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['CreateBookingDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingResponse'];
+        };
+      };
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Taken or not offered: nextStarts */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingConflictResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_get: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_move: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['MoveBookingDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Taken or not offered: nextStarts */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingConflictResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_cancel: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_requestMove: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['MoveRequestDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
       409: {
         headers: {
           [name: string]: unknown;

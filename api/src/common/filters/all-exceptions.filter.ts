@@ -1,3 +1,4 @@
+import { TimeTakenException } from '../errors/time-taken.exception';
 import { STATUS_CODES } from 'node:http';
 import { NotFoundError, UniqueConstraintViolationException } from '@mikro-orm/core';
 import {
@@ -18,6 +19,8 @@ export interface ErrorBody {
   error: string;
   message: string;
   fieldErrors?: FieldErrors;
+  /** Only with a 409 for a taken time: the next times that are free. */
+  nextStarts?: unknown[];
 }
 
 export const GENERIC_SERVER_ERROR_MESSAGE = 'Something went wrong on our side. Try again later.';
@@ -64,6 +67,12 @@ function messageOf(exception: HttpException): string {
 export function toErrorBody(exception: unknown): ErrorBody {
   if (exception instanceof FieldErrorsException) {
     return body(exception.getStatus(), messageOf(exception), exception.fieldErrors);
+  }
+  if (exception instanceof TimeTakenException) {
+    return {
+      ...body(exception.getStatus(), messageOf(exception)),
+      nextStarts: exception.nextStarts,
+    };
   }
   if (exception instanceof HttpException) {
     return body(exception.getStatus(), messageOf(exception));

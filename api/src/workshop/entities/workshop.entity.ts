@@ -24,7 +24,13 @@ export interface WorkshopCardFields {
  * Policies). Percentages are stored as whole basis points (1000 = 10 %), money as integer cents.
  */
 @Entity()
-export class Workshop extends BaseEntity {
+export class Workshop extends BaseEntity<
+  | 'holidayRegion'
+  | 'slotStepMinutes'
+  | 'holdMinutes'
+  | 'leadTimeBufferDays'
+  | 'fittingMinutesPerWheel'
+> {
   @Property({ type: 'string', length: 120 })
   name!: string;
 
@@ -88,4 +94,26 @@ export class Workshop extends BaseEntity {
 
   @Property({ type: 'integer' })
   quoteValidDays!: number;
+
+  // ---- Calendar (Manage → Workshop) ----
+
+  /** Public holidays from the date-holidays data of this region: 'AU-NSW', 'NZ'. */
+  @Property({ type: 'string', length: 20, default: 'AU-NSW' })
+  holidayRegion: string = 'AU-NSW';
+
+  /** Start times are offered every this many minutes from opening. */
+  @Property({ type: 'smallint', default: 30 })
+  slotStepMinutes: number = 30;
+
+  /** How long a held time is kept for the customer before it is released. */
+  @Property({ type: 'smallint', default: 15 })
+  holdMinutes: number = 15;
+
+  /** Calendar days added after the longest lead time of special-order parts (and to today). */
+  @Property({ type: 'smallint', default: 1 })
+  leadTimeBufferDays: number = 1;
+
+  /** Bay time to mount, balance and fit one wheel (tyre bay, or the hoist when there is one). */
+  @Property({ type: 'smallint', default: 15 })
+  fittingMinutesPerWheel: number = 15;
 }

@@ -1,0 +1,128 @@
+import { Body, Controller, Get, HttpCode, HttpStatus, Param, Post, Query } from '@nestjs/common';
+import {
+  ApiBadRequestResponse,
+  ApiConflictResponse,
+  ApiCreatedResponse,
+  ApiNotFoundResponse,
+  ApiOkResponse,
+  ApiOperation,
+  ApiTags,
+} from '@nestjs/swagger';
+import { CurrentUser } from '../common/decorators/current-user.decorator';
+import { Roles } from '../common/decorators/roles.decorator';
+import { IdParams } from '../common/dto/id.params';
+import { ErrorResponse } from '../common/filters/error.response';
+import type { User } from '../users/entities/user.entity';
+import { BookingsService } from './bookings.service';
+import { AvailabilityResponse, BookingConflictResponse } from './dto/availability.response';
+import {
+  AvailabilityQueryDto,
+  CreateBookingDto,
+  MoveBookingDto,
+  MoveRequestDto,
+} from './dto/booking-requests.dto';
+import { BookingListResponse, BookingResponse } from './dto/booking.response';
+
+@ApiTags('bookings')
+@Controller()
+export class BookingsController {
+  constructor(private readonly bookings: BookingsService) {}
+
+  @Roles('customer', 'desk', 'manager')
+  @Get('availability')
+  @ApiOperation({
+    summary:
+      'Start times that fit a quote version: per day, each with its bay segments (workshop zone and UTC)',
+  })
+  @ApiOkResponse({ type: AvailabilityResponse })
+  @ApiBadRequestResponse({ type: ErrorResponse })
+  @ApiNotFoundResponse({ type: ErrorResponse })
+  @ApiConflictResponse({
+    description: 'The version cannot be booked (expired, replaced…)',
+    type: ErrorResponse,
+  })
+  availability(
+    @Query() query: AvailabilityQueryDto,
+    @CurrentUser() user: User,
+  ): Promise<AvailabilityResponse> {
+    return this.bookings.findAvailability(query, user);
+  }
+
+  @Roles('customer', 'desk', 'manager')
+  @Post('bookings')
+  @ApiOperation({
+    summary: 'Hold a start time for a quote version (state held, until holdExpiresAt)',
+  })
+  @ApiCreatedResponse({ type: BookingResponse })
+  @ApiBadRequestResponse({ type: ErrorResponse })
+  @ApiConflictResponse({
+    description: 'Taken or not offered: nextStarts',
+    type: BookingConflictResponse,
+  })
+  hold(@Body() dto: CreateBookingDto, @CurrentUser() user: User): Promise<BookingResponse> {
+    return this.bookings.hold(dto, user);
+  }
+
+  @Roles('customer', 'desk', 'manager')
+  @Get('bookings')
+  @ApiOperation({
+    summary: "Bookings, newest first (a customer's own; every booking for the desk)",
+  })
+  @ApiOkResponse({ type: BookingListResponse })
+  list(@CurrentUser() user: User): Promise<BookingListResponse> {
+    return this.bookings.list(user);
+  }
+
+  @Roles('customer', 'desk', 'manager')
+  @Get('bookings/:id')
+  @ApiOperation({ summary: "One booking (another customer's is 404)" })
+  @ApiOkResponse({ type: BookingResponse })
+  @ApiNotFoundResponse({ type: ErrorResponse })
+  get(@Param() params: IdParams, @CurrentUser() user: User): Promise<BookingResponse> {
+    return this.bookings.get(params.id, user);
+  }
+
+  @Roles('customer', 'desk', 'manager')
+  @Post('bookings/:id/move')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({
+    summary:
+      'Move to another start: all reservations at once or nothing (the customer while held; the desk while held, requested or confirmed)',
+  })
+  @ApiOkResponse({ type: BookingResponse })
+  @ApiConflictResponse({
+    description: 'Taken or not offered: nextStarts',
+    type: BookingConflictResponse,
+  })
+  move(
+    @Param() params: IdParams,
+    @Body() dto: MoveBookingDto,
+    @CurrentUser() user: User,
+  ): Promise<BookingResponse> {
+    return this.bookings.move(params.id, dto, user);
+  }
+
+  @Roles('customer', 'desk', 'manager')
+  @Post('bookings/:id/cancel')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({ summary: 'Cancel (or release a hold): the bays are freed' })
+  @ApiOkResponse({ type: BookingResponse })
+  @ApiConflictResponse({ type: ErrorResponse })
+  cancel(@Param() params: IdParams, @CurrentUser() user: User): Promise<BookingResponse> {
+    return this.bookings.cancel(params.id, user);
+  }
+
+  @Roles('customer')
+  @Post('bookings/:id/move-request')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({ summary: 'Ask the workshop to move a requested or confirmed booking' })
+  @ApiOkResponse({ type: BookingResponse })
+  @ApiConflictResponse({ type: ErrorResponse })
+  requestMove(
+    @Param() params: IdParams,
+    @Body() dto: MoveRequestDto,
+    @CurrentUser() user: User,
+  ): Promise<BookingResponse> {
+    return this.bookings.requestMove(params.id, dto, user);
+  }
+}

@@ -1,0 +1,18 @@
+import { MikroOrmModule } from '@mikro-orm/nestjs';
+import { Module } from '@nestjs/common';
+import { QuotesModule } from '../quotes/quotes.module';
+import { WorkshopModule } from '../workshop/workshop.module';
+import { AvailabilityService } from './availability.service';
+import { BookingsController } from './bookings.controller';
+import { BookingsService } from './bookings.service';
+import { Booking } from './entities/booking.entity';
+import { Reservation } from './entities/reservation.entity';
+import { HoldSweeperService } from './hold-sweeper.service';
+
+@Module({
+  imports: [MikroOrmModule.forFeature([Booking, Reservation]), QuotesModule, WorkshopModule],
+  controllers: [BookingsController],
+  providers: [BookingsService, AvailabilityService, HoldSweeperService],
+  exports: [BookingsService, AvailabilityService, HoldSweeperService],
+})
+export class BookingsModule {}

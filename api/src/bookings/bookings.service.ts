@@ -1,0 +1,430 @@
+import { EntityManager } from '@mikro-orm/postgresql';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { FieldErrorsException } from '../common/errors/field-errors.exception';
+import { TimeTakenException } from '../common/errors/time-taken.exception';
+import { vehicleName } from '../fit-reports/fit-reports.service';
+import { QuoteVersion } from '../quotes/entities/quote-version.entity';
+import { quoteReference } from '../quotes/quote-reference';
+import { QuotesService } from '../quotes/quotes.service';
+import { type StartOption, startOptionAt } from '../scheduling/availability';
+import type { User } from '../users/entities/user.entity';
+import { Bay } from '../workshop/entities/bay.entity';
+import { WorkshopService } from '../workshop/workshop.service';
+import { AvailabilityService, type BusyExclusion } from './availability.service';
+import { type BookingState, bookingReference } from './booking-states';
+import { isCalendarDate, startOptionResponse, utcIso, zonedIso } from './booking-times';
+import type {
+  AvailabilityQueryDto,
+  CreateBookingDto,
+  MoveBookingDto,
+  MoveRequestDto,
+} from './dto/booking-requests.dto';
+import type { AvailabilityResponse, StartOptionResponse } from './dto/availability.response';
+import type { BookingListResponse, BookingResponse } from './dto/booking.response';
+import { Booking } from './entities/booking.entity';
+import { Reservation } from './entities/reservation.entity';
+import { expireLapsedHolds, isOverlapRefusal } from './holds';
+
+/** Roles that see and manage every booking. */
+const DESK_ROLES = ['desk', 'manager'] as const;
+/** Tries of a hold or move whose bay was taken by a concurrent request: then another bay is tried. */
+const ATTEMPTS = 3;
+/** Alternatives offered with a 409. */
+const NEXT_STARTS = 5;
+const DEFAULT_DAYS = 14;
+
+const TAKEN_MESSAGE = 'That time has just been taken or is no longer offered. Pick another time.';
+
+function seesEveryBooking(user: User): boolean {
+  return (DESK_ROLES as readonly string[]).includes(user.role);
+}
+
+const POPULATE = [
+  'customer',
+  'reservations',
+  'reservations.bay',
+  'quoteVersion',
+  'quoteVersion.quote',
+  'quoteVersion.quote.vehicleModel',
+] as const;
+
+/**
+ * Holds, moves and cancellations of bay time. Every change of reservations happens in one
+ * transaction; the database's exclusion constraint is the final word on overlaps, so a race
+ * between two requests for one bay ends with one of them refused (409), never both held.
+ */
+@Injectable()
+export class BookingsService {
+  constructor(
+    private readonly em: EntityManager,
+    private readonly quotes: QuotesService,
+    private readonly availability: AvailabilityService,
+    private readonly workshop: WorkshopService,
+  ) {}
+
+  async findAvailability(query: AvailabilityQueryDto, user: User): Promise<AvailabilityResponse> {
+    const fromDate = query.from ?? (await this.availability.today());
+    if (!isCalendarDate(fromDate)) {
+      throw new FieldErrorsException({ from: ['is not a calendar date'] });
+    }
+    const version = await this.quotes.assertBookable(query.quoteVersionId, user);
+    const found = await this.availability.find(
+      this.em,
+      version,
+      { fromDate, days: query.days ?? DEFAULT_DAYS },
+      { quoteId: version.quote.id },
+    );
+    const timeZone = found.settings.timeZone;
+    return {
+      quoteVersionId: version.id,
+      timeZone,
+      holdMinutes: found.settings.holdMinutes,
+      plan: found.plan,
+      days: found.days.map((day) => ({
+        date: day.date,
+        closedReason: day.closedReason,
+        starts: day.starts.map((option) => startOptionResponse(option, timeZone)),
+      })),
+    };
+  }
+
+  /** Holds the time for the customer of the quote; an earlier live hold of the quote is released. */
+  async hold(dto: CreateBookingDto, user: User): Promise<BookingResponse> {
+    const startMs = Date.parse(dto.start);
+    const version = await this.quotes.assertBookable(dto.quoteVersionId, user);
+    const id = await this.withRetries(version, startMs, { quoteId: version.quote.id }, (em, now) =>
+      this.holdOnce(em, version.id, startMs, user, now),
+    );
+    return this.get(id, user);
+  }
+
+  async move(id: string, dto: MoveBookingDto, user: User): Promise<BookingResponse> {
+    const startMs = Date.parse(dto.start);
+    const booking = await this.loadVisible(this.em, id, user);
+    this.assertMovable(booking, user);
+    if (booking.state === 'held') await this.quotes.assertBookable(booking.quoteVersion.id, user);
+    await this.withRetries(booking.quoteVersion, startMs, { bookingId: booking.id }, (em, now) =>
+      this.moveOnce(em, booking.id, startMs, user, now),
+    );
+    return this.get(booking.id, user);
+  }
+
+  async cancel(id: string, user: User): Promise<BookingResponse> {
+    await this.em.transactional(async (em) => {
+      await expireLapsedHolds(em, new Date());
+      const booking = await this.lockVisible(em, id, user);
+      const allowed: BookingState[] = seesEveryBooking(user)
+        ? ['held', 'requested', 'confirmed', 'in-progress']
+        : ['held', 'requested', 'confirmed'];
+      if (!allowed.includes(booking.state)) {
+        throw new ConflictException(
+          `Booking ${bookingReference(booking.number)} is ${booking.state} and cannot be cancelled.`,
+        );
+      }
+      booking.state = 'cancelled';
+      booking.stateChangedAt = new Date();
+      booking.cancelledAt = booking.stateChangedAt;
+      booking.holdExpiresAt = null;
+      for (const reservation of booking.reservations) reservation.active = false;
+    });
+    return this.get(id, user);
+  }
+
+  async requestMove(id: string, dto: MoveRequestDto, user: User): Promise<BookingResponse> {
+    await this.em.transactional(async (em) => {
+      const booking = await this.lockVisible(em, id, user);
+      if (booking.customer.id !== user.id) throw new NotFoundException('No booking has this id');
+      if (booking.state !== 'requested' && booking.state !== 'confirmed') {
+        throw new ConflictException(
+          booking.state === 'held'
+            ? 'A held time can be changed directly: pick another time.'
+            : `Booking ${bookingReference(booking.number)} is ${booking.state}: it cannot be moved.`,
+        );
+      }
+      booking.moveRequestNote = dto.note.trim();
+      booking.moveRequestedAt = new Date();
+    });
+    return this.get(id, user);
+  }
+
+  async list(user: User): Promise<BookingListResponse> {
+    await expireLapsedHolds(this.em, new Date());
+    const timeZone = (await this.workshop.settings()).timeZone;
+    const bookings = await this.em
+      .fork()
+      .find(Booking, seesEveryBooking(user) ? {} : { customer: user.id }, {
+        populate: POPULATE,
+        orderBy: { createdAt: 'desc', number: 'desc' },
+      });
+    return { items: bookings.map((booking) => this.toResponse(booking, timeZone)) };
+  }
+
+  async get(id: string, user: User): Promise<BookingResponse> {
+    await expireLapsedHolds(this.em, new Date());
+    const timeZone = (await this.workshop.settings()).timeZone;
+    const booking = await this.loadVisible(this.em.fork(), id, user);
+    return this.toResponse(booking, timeZone);
+  }
+
+  // ---- inside a transaction ---------------------------------------------------------------
+
+  private async holdOnce(
+    em: EntityManager,
+    versionId: string,
+    startMs: number,
+    user: User,
+    now: Date,
+  ): Promise<string> {
+    await expireLapsedHolds(em, now);
+    const version = await em.findOneOrFail(QuoteVersion, versionId, {
+      populate: ['quote', 'quote.customer'],
+    });
+    // One live hold per quote: picking a new time lets go of the one picked before.
+    const earlier = await em.find(
+      Booking,
+      { state: 'held', quoteVersion: { quote: version.quote.id } },
+      { populate: ['reservations'] },
+    );
+    for (const booking of earlier) {
+      booking.state = 'cancelled';
+      booking.stateChangedAt = now;
+      booking.cancelledAt = now;
+      booking.holdExpiresAt = null;
+      for (const reservation of booking.reservations) reservation.active = false;
+    }
+    await em.flush();
+
+    const { option, settings, plan } = await this.optionAt(em, version, startMs, {}, now);
+    const booking = new Booking({
+      customer: version.quote.customer,
+      quoteVersion: version,
+      createdBy: user,
+      state: 'held',
+      startsAt: new Date(option.startsAtMs),
+      endsAt: new Date(option.endsAtMs),
+      holdExpiresAt: new Date(now.getTime() + settings.holdMinutes * 60_000),
+      plan,
+    });
+    em.persist(booking);
+    await this.reserve(em, booking, option);
+    await em.flush();
+    return booking.id;
+  }
+
+  private async moveOnce(
+    em: EntityManager,
+    id: string,
+    startMs: number,
+    user: User,
+    now: Date,
+  ): Promise<string> {
+    await expireLapsedHolds(em, now);
+    const booking = await this.lockVisible(em, id, user);
+    this.assertMovable(booking, user);
+    // Release first, in this transaction: the booking's own time does not stand in its way, and
+    // if the new time is refused everything rolls back to where it was.
+    for (const reservation of booking.reservations) em.remove(reservation);
+    await em.flush();
+    const { option, settings, plan } = await this.optionAt(
+      em,
+      booking.quoteVersion,
+      startMs,
+      {},
+      now,
+    );
+    booking.startsAt = new Date(option.startsAtMs);
+    booking.endsAt = new Date(option.endsAtMs);
+    booking.plan = plan;
+    if (booking.state === 'held') {
+      booking.holdExpiresAt = new Date(now.getTime() + settings.holdMinutes * 60_000);
+    }
+    await this.reserve(em, booking, option);
+    await em.flush();
+    return booking.id;
+  }
+
+  /**
+   * Takes the option's bays: first it locks them against being switched off meanwhile (Manage →
+   * Workshop locks a bay for update before it checks for reservations), then adds a reservation
+   * per segment. A bay switched off since the availability was read makes the time taken.
+   */
+  private async reserve(em: EntityManager, booking: Booking, option: StartOption): Promise<void> {
+    const bayIds = [...new Set(option.segments.map((segment) => segment.bayId))];
+    const open = await em.execute<{ id: string }[]>(
+      `select id from bay where id in (${bayIds.map(() => '?').join(', ')}) and active for share`,
+      bayIds,
+    );
+    if (open.length !== bayIds.length) throw new TimeTakenException(TAKEN_MESSAGE, []);
+    for (const segment of option.segments) {
+      em.persist(
+        new Reservation({
+          booking,
+          bay: em.getReference(Bay, segment.bayId),
+          startsAt: new Date(segment.startsAtMs),
+          endsAt: new Date(segment.endsAtMs),
+        }),
+      );
+    }
+  }
+
+  /** The offered option at exactly that start, or a 409 with the next ones. */
+  private async optionAt(
+    em: EntityManager,
+    version: QuoteVersion,
+    startMs: number,
+    exclusion: BusyExclusion,
+    now: Date,
+  ) {
+    const timeZone = (await this.workshop.settings()).timeZone;
+    const fromDate = await this.workshop.localDate(new Date(startMs));
+    const context = await this.availability.context(
+      em,
+      version,
+      { fromDate, days: 1 },
+      exclusion,
+      now,
+    );
+    if (context.plan.segments.length === 0) {
+      throw new ConflictException('This quote has no workshop time to book.');
+    }
+    const option = startOptionAt(context.query, startMs);
+    if (!option) {
+      throw new TimeTakenException(
+        TAKEN_MESSAGE,
+        await this.nextStarts(em, version, startMs, exclusion, now, timeZone),
+      );
+    }
+    return { option, settings: context.settings, plan: context.plan };
+  }
+
+  private async nextStarts(
+    em: EntityManager,
+    version: QuoteVersion,
+    startMs: number,
+    exclusion: BusyExclusion,
+    now: Date,
+    timeZone: string,
+  ): Promise<StartOptionResponse[]> {
+    const fromDate = await this.workshop.localDate(new Date(Math.max(startMs, now.getTime())));
+    const found = await this.availability.find(
+      em,
+      version,
+      { fromDate, days: DEFAULT_DAYS },
+      exclusion,
+      now,
+    );
+    return found.days
+      .flatMap((day) => day.starts)
+      .filter((option) => option.startsAtMs > startMs)
+      .slice(0, NEXT_STARTS)
+      .map((option) => startOptionResponse(option, timeZone));
+  }
+
+  /**
+   * Runs a hold or move in its own transaction. A refusal by the exclusion constraint means a
+   * concurrent request took the bay between our read and our write: the transaction is rolled
+   * back and tried again (another bay of the kind may be free); after the last try it is a 409.
+   */
+  private async withRetries(
+    version: QuoteVersion,
+    startMs: number,
+    exclusion: BusyExclusion,
+    attempt: (em: EntityManager, now: Date) => Promise<string>,
+  ): Promise<string> {
+    for (let tries = 1; ; tries += 1) {
+      try {
+        return await this.em.fork().transactional((em) => attempt(em, new Date()));
+      } catch (error) {
+        if (!isOverlapRefusal(error)) throw error;
+        if (tries >= ATTEMPTS) {
+          const now = new Date();
+          const timeZone = (await this.workshop.settings()).timeZone;
+          throw new TimeTakenException(
+            TAKEN_MESSAGE,
+            await this.nextStarts(this.em.fork(), version, startMs, exclusion, now, timeZone),
+          );
+        }
+      }
+    }
+  }
+
+  private assertMovable(booking: Booking, user: User): void {
+    const allowed: BookingState[] = seesEveryBooking(user)
+      ? ['held', 'requested', 'confirmed']
+      : ['held'];
+    if (allowed.includes(booking.state)) return;
+    throw new ConflictException(
+      seesEveryBooking(user) || (booking.state !== 'requested' && booking.state !== 'confirmed')
+        ? `Booking ${bookingReference(booking.number)} is ${booking.state} and cannot be moved.`
+        : 'Ask the workshop to move this booking.',
+    );
+  }
+
+  private async loadVisible(em: EntityManager, id: string, user: User): Promise<Booking> {
+    const booking = await em.findOne(
+      Booking,
+      seesEveryBooking(user) ? { id } : { id, customer: user.id },
+      { populate: POPULATE },
+    );
+    if (!booking) throw new NotFoundException('No booking has this id');
+    return booking;
+  }
+
+  /** The booking, locked for this transaction (a concurrent change waits), or a 404. */
+  private async lockVisible(em: EntityManager, id: string, user: User): Promise<Booking> {
+    await em.execute('select id from booking where id = ? for update', [id]);
+    return this.loadVisible(em, id, user);
+  }
+
+  private toResponse(booking: Booking, timeZone: string): BookingResponse {
+    const version = booking.quoteVersion;
+    const quote = version.quote;
+    const reservations = booking.reservations.getItems();
+    return {
+      id: booking.id,
+      reference: bookingReference(booking.number),
+      state: booking.state,
+      holdExpiresAt:
+        booking.state === 'held' && booking.holdExpiresAt
+          ? utcIso(booking.holdExpiresAt.getTime())
+          : null,
+      start: zonedIso(booking.startsAt.getTime(), timeZone),
+      startUtc: utcIso(booking.startsAt.getTime()),
+      end: zonedIso(booking.endsAt.getTime(), timeZone),
+      endUtc: utcIso(booking.endsAt.getTime()),
+      timeZone,
+      segments: reservations.map((reservation, index) => ({
+        bayId: reservation.bay.id,
+        bayName: reservation.bay.name,
+        bayKind: reservation.bay.kind,
+        minutes: booking.plan.segments[index]?.minutes ?? 0,
+        start: zonedIso(reservation.startsAt.getTime(), timeZone),
+        startUtc: utcIso(reservation.startsAt.getTime()),
+        end: zonedIso(reservation.endsAt.getTime(), timeZone),
+        endUtc: utcIso(reservation.endsAt.getTime()),
+      })),
+      quote: {
+        id: quote.id,
+        reference: quoteReference(quote.number),
+        versionId: version.id,
+        versionNumber: version.number,
+        totalCents: version.totalCents,
+        depositCents: version.depositCents,
+        vehicleName: vehicleName(quote.vehicleModel),
+      },
+      customer: {
+        id: booking.customer.id,
+        name: booking.customer.name,
+        email: booking.customer.email,
+      },
+      moveRequest:
+        booking.moveRequestNote && booking.moveRequestedAt
+          ? {
+              note: booking.moveRequestNote,
+              requestedAt: utcIso(booking.moveRequestedAt.getTime()),
+            }
+          : null,
+      createdAt: utcIso(booking.createdAt.getTime()),
+    };
+  }
+}

@@ -1,0 +1,123 @@
+import { ApiProperty } from '@nestjs/swagger';
+import { BAY_KINDS, type BayKind } from '../../catalogue/product-kinds';
+import { BOOKING_STATES, type BookingState } from '../booking-states';
+
+/** One stay in one bay: in UTC and in the workshop's zone. */
+export class PlannedSegmentResponse {
+  @ApiProperty({ format: 'uuid' })
+  bayId!: string;
+
+  @ApiProperty({ example: 'Hoist 1' })
+  bayName!: string;
+
+  @ApiProperty({ enum: BAY_KINDS, enumName: 'BayKind' })
+  bayKind!: BayKind;
+
+  @ApiProperty({
+    description: 'Working minutes in the bay (the stay may be longer: breaks, nights)',
+  })
+  minutes!: number;
+
+  @ApiProperty({ example: '2026-12-03T07:30:00+11:00', description: "In the workshop's zone" })
+  start!: string;
+
+  @ApiProperty({ example: '2026-12-02T20:30:00.000Z' })
+  startUtc!: string;
+
+  @ApiProperty({ example: '2026-12-03T11:00:00+11:00' })
+  end!: string;
+
+  @ApiProperty({ example: '2026-12-03T00:00:00.000Z' })
+  endUtc!: string;
+}
+
+export class BookingQuoteSummaryResponse {
+  @ApiProperty({ format: 'uuid' })
+  id!: string;
+
+  @ApiProperty({ example: 'Q-000123' })
+  reference!: string;
+
+  @ApiProperty({ format: 'uuid' })
+  versionId!: string;
+
+  @ApiProperty()
+  versionNumber!: number;
+
+  @ApiProperty({ description: 'Integer cents' })
+  totalCents!: number;
+
+  @ApiProperty({ description: 'Integer cents' })
+  depositCents!: number;
+
+  @ApiProperty({ example: 'Oskerra Barrow GLX dual cab' })
+  vehicleName!: string;
+}
+
+export class BookingCustomerResponse {
+  @ApiProperty({ format: 'uuid' })
+  id!: string;
+
+  @ApiProperty()
+  name!: string;
+
+  @ApiProperty()
+  email!: string;
+}
+
+export class MoveRequestResponse {
+  @ApiProperty()
+  note!: string;
+
+  @ApiProperty({ format: 'date-time' })
+  requestedAt!: string;
+}
+
+export class BookingResponse {
+  @ApiProperty({ format: 'uuid' })
+  id!: string;
+
+  @ApiProperty({ example: 'B-000042' })
+  reference!: string;
+
+  @ApiProperty({ enum: BOOKING_STATES, enumName: 'BookingState' })
+  state!: BookingState;
+
+  @ApiProperty({ type: String, format: 'date-time', nullable: true })
+  holdExpiresAt!: string | null;
+
+  @ApiProperty({ example: '2026-12-03T07:30:00+11:00' })
+  start!: string;
+
+  @ApiProperty({ format: 'date-time' })
+  startUtc!: string;
+
+  @ApiProperty()
+  end!: string;
+
+  @ApiProperty({ format: 'date-time' })
+  endUtc!: string;
+
+  @ApiProperty({ example: 'Australia/Sydney' })
+  timeZone!: string;
+
+  @ApiProperty({ type: [PlannedSegmentResponse] })
+  segments!: PlannedSegmentResponse[];
+
+  @ApiProperty({ type: BookingQuoteSummaryResponse })
+  quote!: BookingQuoteSummaryResponse;
+
+  @ApiProperty({ type: BookingCustomerResponse })
+  customer!: BookingCustomerResponse;
+
+  @ApiProperty({ type: MoveRequestResponse, nullable: true })
+  moveRequest!: MoveRequestResponse | null;
+
+  @ApiProperty({ format: 'date-time' })
+  createdAt!: string;
+}
+
+export class BookingListResponse {
+  @ApiProperty({ type: [BookingResponse] })
+  items!: BookingResponse[];
+}

@@ -1,0 +1,95 @@
+import { Collection, Entity, Enum, ManyToOne, OneToMany, Property } from '@mikro-orm/core';
+import { BaseEntity } from '../../database/base.entity';
+import { QuoteVersion } from '../../quotes/entities/quote-version.entity';
+import type { BayKind } from '../../catalogue/product-kinds';
+import { User } from '../../users/entities/user.entity';
+import { BOOKING_STATES, type BookingState } from '../booking-states';
+import { Reservation } from './reservation.entity';
+
+/** The job plan a booking's time was found for, as it was then (a snapshot). */
+export interface BookingPlanSnapshot {
+  segments: { bayKind: BayKind; minutes: number; descriptions: string[] }[];
+  totalMinutes: number;
+  longestLeadDays: number;
+  earliestStartDate: string;
+}
+
+/**
+ * Bay time for one quote version. Its reservations (one per segment) hold the bays; the
+ * database refuses two active reservations of one bay that overlap.
+ */
+@Entity()
+export class Booking extends BaseEntity<
+  'holdExpiresAt' | 'cancelledAt' | 'moveRequestNote' | 'moveRequestedAt' | 'stateChangedAt'
+> {
+  /** Shown as B-000042; from a sequence. */
+  @Property({ type: 'integer', autoincrement: true, unique: true })
+  number!: number;
+
+  @ManyToOne(() => User, { deleteRule: 'cascade', index: true })
+  customer: User;
+
+  @ManyToOne(() => QuoteVersion, { deleteRule: 'restrict', index: true })
+  quoteVersion: QuoteVersion;
+
+  @ManyToOne(() => User, { deleteRule: 'restrict' })
+  createdBy: User;
+
+  @Enum({ items: () => [...BOOKING_STATES], type: 'string', index: true })
+  state: BookingState;
+
+  @Property({ type: 'datetime', columnType: 'timestamptz' })
+  stateChangedAt: Date = new Date();
+
+  /** The first segment's start (UTC). */
+  @Property({ type: 'datetime', columnType: 'timestamptz', index: true })
+  startsAt: Date;
+
+  /** The last segment's end (UTC). */
+  @Property({ type: 'datetime', columnType: 'timestamptz' })
+  endsAt: Date;
+
+  /** While `held`: when the hold lapses. */
+  @Property({ type: 'datetime', columnType: 'timestamptz', nullable: true, index: true })
+  holdExpiresAt: Date | null = null;
+
+  /** The job plan the time was found for (segments and their minutes), as it was then. */
+  @Property({ type: 'json' })
+  plan: BookingPlanSnapshot;
+
+  @Property({ type: 'datetime', columnType: 'timestamptz', nullable: true })
+  cancelledAt: Date | null = null;
+
+  /** The customer asked the workshop to move it (a note for the desk). */
+  @Property({ type: 'text', nullable: true })
+  moveRequestNote: string | null = null;
+
+  @Property({ type: 'datetime', columnType: 'timestamptz', nullable: true })
+  moveRequestedAt: Date | null = null;
+
+  @OneToMany(() => Reservation, (reservation) => reservation.booking, {
+    orderBy: { startsAt: 'asc' },
+  })
+  reservations = new Collection<Reservation>(this);
+
+  constructor(fields: {
+    customer: User;
+    quoteVersion: QuoteVersion;
+    createdBy: User;
+    state: BookingState;
+    startsAt: Date;
+    endsAt: Date;
+    holdExpiresAt: Date | null;
+    plan: BookingPlanSnapshot;
+  }) {
+    super();
+    this.customer = fields.customer;
+    this.quoteVersion = fields.quoteVersion;
+    this.createdBy = fields.createdBy;
+    this.state = fields.state;
+    this.startsAt = fields.startsAt;
+    this.endsAt = fields.endsAt;
+    this.holdExpiresAt = fields.holdExpiresAt;
+    this.plan = fields.plan;
+  }
+}
