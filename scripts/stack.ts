@@ -315,6 +315,8 @@ async function testStack(): Promise<never> {
   // The API suite builds its app in-process and serves no web build.
   const testEnv = { ...apiEnv('liftwright_test', ports, appUrl, 'test'), WEB_DIST_DIR: undefined };
   results.push(await vitestSuite('api', 'api', testEnv));
+  // The web app's unit tests (pure helpers: formatting, form rules); no server needed.
+  results.push(await vitestSuite('web', 'web', {}));
 
   try {
     buildApi();

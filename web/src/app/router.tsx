@@ -77,7 +77,11 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               path: paths.plan.path,
               lazy: lazy(() => import('./routes/public/plan/layout')),
-              children: plannerSteps(),
+              children: [
+                ...plannerSteps(),
+                // After the review, the customer's own planner books a time for the saved quote.
+                { path: 'book/:quoteId', lazy: lazy(() => import('./routes/planner/book')) },
+              ],
             },
             { path: paths.auth.signIn.path, lazy: lazy(() => import('./routes/public/sign-in')) },
             {
@@ -105,6 +109,14 @@ export function createAppRouter(queryClient: QueryClient) {
               lazy: lazy(() => import('./routes/account/quotes')),
             },
             { path: paths.account.quote.path, lazy: lazy(() => import('./routes/account/quote')) },
+            {
+              path: paths.account.bookings.path,
+              lazy: lazy(() => import('./routes/account/bookings')),
+            },
+            {
+              path: paths.account.booking.path,
+              lazy: lazy(() => import('./routes/account/booking')),
+            },
             notFound(),
           ]),
         },
@@ -126,6 +138,10 @@ export function createAppRouter(queryClient: QueryClient) {
             },
             { path: paths.desk.quotes.path, lazy: lazy(() => import('./routes/desk/quotes')) },
             { path: paths.desk.quote.path, lazy: lazy(() => import('./routes/desk/quote')) },
+            {
+              path: paths.desk.workshop.path,
+              lazy: lazy(() => import('./routes/desk/workshop')),
+            },
             notFound(),
           ]),
         },
@@ -155,6 +171,10 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               path: paths.manage.policies.path,
               lazy: lazy(() => import('./routes/manage/policies')),
+            },
+            {
+              path: paths.manage.workshop.path,
+              lazy: lazy(() => import('./routes/manage/workshop')),
             },
             notFound(),
           ]),

@@ -14,6 +14,11 @@ export const paths = {
     getHref: () => '/plan',
     /** One planner step: "/plan/wheels". */
     step: (step: string) => `/plan/${step}`,
+    /** The step after the review: a time in the workshop for a saved quote. */
+    book: {
+      path: '/plan/book/:quoteId',
+      getHref: (quoteId: string) => `/plan/book/${encodeURIComponent(quoteId)}`,
+    },
   },
   auth: {
     signIn: {
@@ -37,6 +42,11 @@ export const paths = {
       path: '/account/quotes/:quoteId',
       getHref: (quoteId: string) => `/account/quotes/${encodeURIComponent(quoteId)}`,
     },
+    bookings: { path: '/account/bookings', getHref: () => '/account/bookings' },
+    booking: {
+      path: '/account/bookings/:bookingId',
+      getHref: (bookingId: string) => `/account/bookings/${encodeURIComponent(bookingId)}`,
+    },
   },
   desk: {
     home: { path: '/desk', getHref: () => '/desk' },
@@ -54,6 +64,8 @@ export const paths = {
       path: '/desk/quotes/:quoteId',
       getHref: (quoteId: string) => `/desk/quotes/${encodeURIComponent(quoteId)}`,
     },
+    /** The workshop's hours, bays, closures and holidays, read-only for the front desk. */
+    workshop: { path: '/desk/workshop', getHref: () => '/desk/workshop' },
   },
   workshop: {
     home: { path: '/workshop', getHref: () => '/workshop' },
@@ -64,6 +76,7 @@ export const paths = {
     policies: { path: '/manage/policies', getHref: () => '/manage/policies' },
     catalogue: { path: '/manage/catalogue', getHref: () => '/manage/catalogue' },
     vehicles: { path: '/manage/vehicles', getHref: () => '/manage/vehicles' },
+    workshop: { path: '/manage/workshop', getHref: () => '/manage/workshop' },
     rules: {
       path: '/manage/rules',
       /** With a rule set's id, that set is the one open for editing. */

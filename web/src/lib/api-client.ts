@@ -10,6 +10,11 @@ export class ApiError extends Error {
   readonly requestId?: string;
   /** Seconds from a Retry-After header (throttled requests). */
   readonly retryAfterSeconds?: number;
+  /**
+   * The whole JSON body of the answer, for refusals that carry more than a message (a 409 on a
+   * booking lists the next free starts). Read it through a type guard; null when none came.
+   */
+  readonly body: unknown;
 
   constructor(init: {
     statusCode: number;
@@ -18,6 +23,7 @@ export class ApiError extends Error {
     fieldErrors?: Record<string, string[]>;
     requestId?: string;
     retryAfterSeconds?: number;
+    body?: unknown;
   }) {
     super(init.message);
     this.name = 'ApiError';
@@ -26,6 +32,7 @@ export class ApiError extends Error {
     this.fieldErrors = init.fieldErrors ?? {};
     this.requestId = init.requestId;
     this.retryAfterSeconds = init.retryAfterSeconds;
+    this.body = init.body ?? null;
   }
 
   get isValidation(): boolean {
@@ -119,6 +126,7 @@ async function toApiError(response: Response): Promise<ApiError> {
       fieldErrors: body.fieldErrors,
       requestId: body.requestId,
       retryAfterSeconds,
+      body,
     });
   }
   return new ApiError({

@@ -167,3 +167,46 @@ export type UploadListResponse = Schemas['UploadListResponse'];
 export type Customer = Schemas['CustomerResponse'];
 export type CustomerListResponse = Schemas['CustomerListResponse'];
 export type CreateCustomerRequest = Schemas['CreateCustomerDto'];
+
+// ---- Availability and bookings -------------------------------------------------------------
+export type BookingState = Schemas['BookingState'];
+export type JobSegment = Schemas['JobSegmentResponse'];
+export type JobPlan = Schemas['JobPlanResponse'];
+/** One stay in one bay, in UTC and in the workshop's zone. */
+export type PlannedSegment = Schemas['PlannedSegmentResponse'];
+/** One start time on offer, with every segment it books. */
+export type StartOption = Schemas['StartOptionResponse'];
+export type AvailabilityDay = Schemas['AvailabilityDayResponse'];
+export type Availability = Schemas['AvailabilityResponse'];
+export type BookingQuoteSummary = Schemas['BookingQuoteSummaryResponse'];
+export type BookingMoveRequest = Schemas['MoveRequestResponse'];
+export type Booking = Schemas['BookingResponse'];
+export type BookingListResponse = Schemas['BookingListResponse'];
+/** 409 from creating or moving a booking: why, and the next starts that are free. */
+export type BookingConflict = Schemas['BookingConflictResponse'];
+export type CreateBookingRequest = Schemas['CreateBookingDto'];
+export type MoveBookingRequest = Schemas['MoveBookingDto'];
+export type AskToMoveRequest = Schemas['MoveRequestDto'];
+
+/** GET /api/availability query string. */
+export interface AvailabilityQuery {
+  quoteVersionId: string;
+  /** Workshop-local date YYYY-MM-DD; the API's default is the workshop's today. */
+  from?: string;
+  /** 1 to 31. */
+  days?: number;
+}
+
+// ---- Workshop set-up (Manage → Workshop) ---------------------------------------------------
+export type WorkshopSetup = Schemas['WorkshopSetupResponse'];
+export type Bay = Schemas['BayResponse'];
+export type OpeningHoursEntry = Schemas['OpeningHoursEntryResponse'];
+export type Closure = Schemas['ClosureResponse'];
+export type Holiday = Schemas['HolidayResponse'];
+export type HolidayRegion = Schemas['HolidayRegionResponse'];
+export type UpdateWorkshopCalendarRequest = Schemas['UpdateWorkshopCalendarDto'];
+export type OpeningHoursEntryRequest = Schemas['OpeningHoursEntryDto'];
+export type CreateBayRequest = Schemas['CreateBayDto'];
+export type UpdateBayRequest = Schemas['UpdateBayDto'];
+export type CreateClosureRequest = Schemas['CreateClosureDto'];
+export type HolidayOverrideRequest = Schemas['HolidayOverrideDto'];

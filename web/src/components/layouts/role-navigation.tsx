@@ -1,8 +1,10 @@
 import BadgeOutlined from '@mui/icons-material/BadgeOutlined';
 import DirectionsCarOutlined from '@mui/icons-material/DirectionsCarOutlined';
+import EventAvailableOutlined from '@mui/icons-material/EventAvailableOutlined';
 import EventNoteOutlined from '@mui/icons-material/EventNoteOutlined';
 import GarageOutlined from '@mui/icons-material/GarageOutlined';
 import RuleOutlined from '@mui/icons-material/RuleOutlined';
+import ScheduleOutlined from '@mui/icons-material/ScheduleOutlined';
 import HandymanOutlined from '@mui/icons-material/HandymanOutlined';
 import PercentOutlined from '@mui/icons-material/PercentOutlined';
 import PersonAddAltOutlined from '@mui/icons-material/PersonAddAltOutlined';
@@ -33,6 +35,11 @@ export function navItemsForRole(role: Role): NavItem[] {
         to: paths.account.quotes.getHref(),
         icon: <RequestQuoteOutlined />,
       },
+      {
+        label: 'My bookings',
+        to: paths.account.bookings.getHref(),
+        icon: <EventAvailableOutlined />,
+      },
     );
   }
   const deskWork: NavItem[] = [
@@ -47,8 +54,15 @@ export function navItemsForRole(role: Role): NavItem[] {
       end: true,
     });
     // The front desk's own work follows its home; a manager finds it after the Manage pages,
-    // so the manager's phone bar keeps Manage, Catalogue and Vehicles in reach.
-    if (!canUseArea(role, 'manage')) items.push(...deskWork);
+    // so the manager's phone bar keeps Manage, Catalogue and Vehicles in reach. The workshop's
+    // hours are the desk's to read; a manager edits them under Manage → Workshop.
+    if (!canUseArea(role, 'manage')) {
+      items.push(...deskWork, {
+        label: 'Hours & bays',
+        to: paths.desk.workshop.getHref(),
+        icon: <ScheduleOutlined />,
+      });
+    }
   }
   if (canUseArea(role, 'workshop')) {
     items.push({
@@ -72,6 +86,7 @@ export function navItemsForRole(role: Role): NavItem[] {
       },
       { label: 'Rules', to: paths.manage.rules.getHref(), icon: <RuleOutlined /> },
       { label: 'Policies', to: paths.manage.policies.getHref(), icon: <PercentOutlined /> },
+      { label: 'Workshop', to: paths.manage.workshop.getHref(), icon: <ScheduleOutlined /> },
       { label: 'Staff', to: paths.manage.staff.getHref(), icon: <BadgeOutlined /> },
       ...deskWork,
     );

@@ -31,13 +31,18 @@ export default function AccountHomeRoute() {
           }
         />
         <LandingCard
+          title="My bookings"
+          status="Your times in the workshop: hold a time for a quote, pick another while it is held, ask to move or cancel a booking."
+          actions={
+            <Button component={RouterLink} to={paths.account.bookings.getHref()} variant="outlined">
+              Open my bookings
+            </Button>
+          }
+        />
+        <LandingCard
           title="Still to come"
-          status="Your vehicles and bookings will appear here."
-          upcoming={[
-            'Keep your vehicles, with photos',
-            'Hold a workshop slot and pay the deposit',
-            'Follow your bookings, and ask to move or cancel one',
-          ]}
+          status="Your vehicles and the deposit will appear here."
+          upcoming={['Keep your vehicles, with photos', 'Pay the deposit for a held time']}
         />
       </Box>
     </>

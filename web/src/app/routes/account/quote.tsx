@@ -1,8 +1,10 @@
 import Alert from '@mui/material/Alert';
+import AlertTitle from '@mui/material/AlertTitle';
 import Button from '@mui/material/Button';
 import Link from '@mui/material/Link';
+import EventAvailableOutlined from '@mui/icons-material/EventAvailableOutlined';
 import { useQuery } from '@tanstack/react-query';
-import { Link as RouterLink, useParams } from 'react-router';
+import { Link as RouterLink, useLocation, useParams } from 'react-router';
 import { LoadingScreen } from '@/components/ui/loading-screen';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
@@ -10,8 +12,18 @@ import { quoteQueryOptions } from '@/features/quotes/api/get-quote';
 import { QuoteDetail } from '@/features/quotes/components/quote-detail';
 import { isApiError } from '@/lib/api-client';
 
+/** Set by the planner's review step when it has just saved this quote. */
+function savedFromPlanner(state: unknown): boolean {
+  return (
+    typeof state === 'object' &&
+    state !== null &&
+    (state as { savedFromPlanner?: unknown }).savedFromPlanner === true
+  );
+}
+
 export default function MyQuoteRoute() {
   const { quoteId = '' } = useParams();
+  const location = useLocation();
   const quote = useQuery(quoteQueryOptions(quoteId));
   if (quote.isPending) return <LoadingScreen label="Loading the quote" />;
   if (quote.isError) {
@@ -45,6 +57,10 @@ export default function MyQuoteRoute() {
       </>
     );
   }
+  const latestBookable =
+    [...quote.data.versions].sort((a, b) => b.number - a.number)[0]?.bookable ?? false;
+  const bookHref = paths.plan.book.getHref(quote.data.id);
+  const justSaved = savedFromPlanner(location.state);
   return (
     <>
       <PageHeader
@@ -55,7 +71,41 @@ export default function MyQuoteRoute() {
           </Link>
         }
       />
-      <QuoteDetail quote={quote.data} viewer="customer" />
+      {justSaved && (
+        <Alert
+          severity="success"
+          sx={{ mb: 3 }}
+          action={
+            latestBookable ? (
+              <Button color="inherit" component={RouterLink} to={bookHref}>
+                Book a time
+              </Button>
+            ) : undefined
+          }
+        >
+          <AlertTitle>Quote {quote.data.reference} is saved</AlertTitle>
+          {latestBookable
+            ? 'Book a time in the workshop now, or come back to it any time before the prices run out.'
+            : 'You will find it under My quotes.'}
+        </Alert>
+      )}
+      <QuoteDetail
+        quote={quote.data}
+        viewer="customer"
+        versionActions={(version, latest) =>
+          latest && version.bookable ? (
+            <Button
+              component={RouterLink}
+              to={bookHref}
+              variant="contained"
+              color="secondary"
+              startIcon={<EventAvailableOutlined aria-hidden />}
+            >
+              Book a time
+            </Button>
+          ) : null
+        }
+      />
     </>
   );
 }

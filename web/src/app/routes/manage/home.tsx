@@ -70,8 +70,13 @@ export default function ManageHomeRoute() {
         />
         <LandingCard
           title="Workshop set-up"
-          status="These parts of Manage are still to be built."
-          upcoming={['Bays, opening hours, closures and public holidays', 'Reports']}
+          status="Time zone, opening hours, bays, closures and public holidays: what customers can book."
+          upcoming={['Reports']}
+          actions={
+            <Button component={RouterLink} to={paths.manage.workshop.getHref()} variant="outlined">
+              Open the workshop set-up
+            </Button>
+          }
         />
       </Box>
     </>

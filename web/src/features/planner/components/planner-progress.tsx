@@ -5,19 +5,30 @@ import StepButton from '@mui/material/StepButton';
 import StepLabel from '@mui/material/StepLabel';
 import Stepper from '@mui/material/Stepper';
 import { useNavigate } from 'react-router';
-import { canOpenStep, plannerSteps, stepIndex, stepTitle, type StepId } from '../forms/build';
+import {
+  bookStep,
+  canOpenStep,
+  progressSteps,
+  stepIndex,
+  stepTitle,
+  type ProgressStepId,
+} from '../forms/build';
 import { usePlanner } from '../hooks/use-planner';
 
 /**
  * Where the user is in the planner: a bar on phones, the named steps on wide screens (steps
- * already reachable can be opened from there).
+ * already reachable can be opened from there). In the customer's planner the booking follows
+ * the review: it opens from a saved quote, so the progress shows it without a way into it, and
+ * on the booking the build's steps are shown done (the quote is saved).
  */
-export function PlannerProgress({ step }: { step: StepId }) {
-  const { build, stepHref } = usePlanner();
+export function PlannerProgress({ step }: { step: ProgressStepId }) {
+  const { build, config, stepHref } = usePlanner();
   const navigate = useNavigate();
+  const steps = progressSteps(config.mode);
   const index = stepIndex(step);
-  const total = plannerSteps.length;
+  const total = steps.length;
   const text = `Step ${index + 1} of ${total} — ${stepTitle(step)}`;
+  const booking = step === bookStep.id;
 
   return (
     <>
@@ -34,14 +45,21 @@ export function PlannerProgress({ step }: { step: StepId }) {
         sx={{ display: { xs: 'none', md: 'block' }, mb: 2 }}
       >
         <Stepper nonLinear activeStep={index} alternativeLabel>
-          {plannerSteps.map((candidate) => {
-            const reachable = canOpenStep(build, candidate.id);
-            const done = build.completed.includes(candidate.id);
+          {steps.map((candidate) => {
             const current = candidate.id === step;
+            const buildStep = candidate.id !== bookStep.id ? candidate.id : null;
+            const reachable = !booking && buildStep !== null && canOpenStep(build, buildStep);
+            const done = booking
+              ? !current
+              : buildStep !== null && build.completed.includes(buildStep);
             return (
-              <Step key={candidate.id} completed={done && !current} disabled={!reachable}>
-                {reachable && !current ? (
-                  <StepButton onClick={() => void navigate(stepHref(candidate.id))}>
+              <Step
+                key={candidate.id}
+                completed={done && !current}
+                disabled={!reachable && !current && !done}
+              >
+                {reachable && !current && buildStep ? (
+                  <StepButton onClick={() => void navigate(stepHref(buildStep))}>
                     {candidate.title}
                   </StepButton>
                 ) : (

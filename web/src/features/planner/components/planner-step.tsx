@@ -7,13 +7,20 @@ import ArrowForward from '@mui/icons-material/ArrowForward';
 import { useEffect, useRef, type ReactNode } from 'react';
 import { useLocation, useNavigate } from 'react-router';
 import { DocumentTitle } from '@/components/ui/document-title';
-import { plannerSteps, stepIds, stepIndex, stepTitle, type StepId } from '../forms/build';
+import {
+  bookStep,
+  progressSteps,
+  stepIds,
+  stepIndex,
+  stepTitle,
+  type ProgressStepId,
+} from '../forms/build';
 import { usePlanner } from '../hooks/use-planner';
 import { PlannerProgress } from './planner-progress';
 import { StartAgainButton } from './start-again-button';
 
 interface Props {
-  step: StepId;
+  step: ProgressStepId;
   /** A line under the heading. */
   lead?: ReactNode;
   children: ReactNode;
@@ -26,21 +33,38 @@ interface Props {
   footerMessage?: ReactNode;
   /** Replaces the "Next" button (the review step's "Save quote"). */
   primaryAction?: ReactNode;
+  /** Where "Back" goes instead of the step before (the booking goes back to its quote). */
+  backHref?: string;
+  /** The Back button's words, when it goes somewhere other than the step before. */
+  backLabel?: string;
 }
 
 /**
  * The frame of one planner step: progress, the step's heading (which takes focus when the step
  * changes, so keyboard and screen-reader users start there), the content, then Back and Next.
  */
-export function PlannerStep({ step, lead, children, onNext, footerMessage, primaryAction }: Props) {
+export function PlannerStep({
+  step,
+  lead,
+  children,
+  onNext,
+  footerMessage,
+  primaryAction,
+  backHref: backHrefOverride,
+  backLabel = 'Back',
+}: Props) {
   const { config, stepHref, completeStep, openedOnKey } = usePlanner();
   const navigate = useNavigate();
   const { key } = useLocation();
   const headingRef = useRef<HTMLHeadingElement>(null);
   const index = stepIndex(step);
-  const previous = index > 0 ? stepIds[index - 1] : null;
-  const next = index < stepIds.length - 1 ? stepIds[index + 1] : null;
-  const backHref = previous ? stepHref(previous) : (config.firstStepBackHref ?? null);
+  const booking = step === bookStep.id;
+  // The booking is reached from a saved quote, not with "Next": it has no step before or after.
+  const previous = !booking && index > 0 ? stepIds[index - 1] : null;
+  const next = !booking && index < stepIds.length - 1 ? stepIds[index + 1] : null;
+  const backHref =
+    backHrefOverride ??
+    (previous ? stepHref(previous) : booking ? null : (config.firstStepBackHref ?? null));
 
   useEffect(() => {
     // The first step shown after opening the planner leaves focus where the browser put it.
@@ -48,7 +72,7 @@ export function PlannerStep({ step, lead, children, onNext, footerMessage, prima
   }, [key, openedOnKey]);
 
   const goNext = () => {
-    if (onNext && !onNext()) return;
+    if (booking || (onNext && !onNext())) return;
     completeStep(step);
     if (next) void navigate(stepHref(next));
   };
@@ -67,9 +91,10 @@ export function PlannerStep({ step, lead, children, onNext, footerMessage, prima
         }}
       >
         <Typography variant="overline" component="p" color="text.secondary">
-          Step {index + 1} of {plannerSteps.length}
+          Step {index + 1} of {progressSteps(config.mode).length}
         </Typography>
-        <StartAgainButton />
+        {/* The build is a saved quote by now: nothing to start again. */}
+        {!booking && <StartAgainButton />}
       </Box>
       <Typography
         id={`planner-step-${step}`}
@@ -110,7 +135,7 @@ export function PlannerStep({ step, lead, children, onNext, footerMessage, prima
               startIcon={<ArrowBack aria-hidden />}
               onClick={() => void navigate(backHref)}
             >
-              Back
+              {backLabel}
             </Button>
           ) : (
             <span />

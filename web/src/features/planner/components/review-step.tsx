@@ -98,8 +98,10 @@ export function ReviewStep() {
         onSuccess: (quote) => {
           // The build is now a quote: the next visit to the planner starts afresh.
           discard();
+          // The customer's quote page then offers to book a time for it straight away.
           void navigate(
             walkIn ? paths.desk.quote.getHref(quote.id) : paths.account.quote.getHref(quote.id),
+            walkIn ? undefined : { state: { savedFromPlanner: true } },
           );
         },
       },

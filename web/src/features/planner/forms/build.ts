@@ -31,6 +31,23 @@ export const plannerSteps = [
 
 export type StepId = (typeof plannerSteps)[number]['id'];
 
+/**
+ * The customer's planner goes on after the review: once the quote is saved, a time in the
+ * workshop is booked for it. It has its own address with the quote's id (/plan/book/:quoteId)
+ * and is not part of the build, so it is shown in the progress but never "opened" from it.
+ */
+export const bookStep = { id: 'book', title: 'Book a time' } as const;
+
+/** A step the progress shows: a step of the build, or the booking after it. */
+export type ProgressStepId = StepId | typeof bookStep.id;
+
+/** The steps the progress shows: the walk-in quote at the desk ends with the review. */
+export function progressSteps(
+  mode: 'customer' | 'walk-in',
+): readonly { id: ProgressStepId; title: string }[] {
+  return mode === 'customer' ? [...plannerSteps, bookStep] : plannerSteps;
+}
+
 export const stepIds: readonly StepId[] = plannerSteps.map((step) => step.id);
 
 export const vehicleUses: readonly VehicleUse[] = ['daily', 'touring', 'towing', 'off-road'];
@@ -252,10 +269,11 @@ export function canOpenStep(build: PlannerBuild, step: StepId): boolean {
   return stepIds.slice(0, index).every((earlier) => build.completed.includes(earlier));
 }
 
-export function stepIndex(step: StepId): number {
-  return stepIds.indexOf(step);
+/** Where a step stands in the progress (the booking comes after every step of the build). */
+export function stepIndex(step: ProgressStepId): number {
+  return step === bookStep.id ? stepIds.length : stepIds.indexOf(step);
 }
 
-export function stepTitle(step: StepId): string {
-  return plannerSteps[stepIndex(step)].title;
+export function stepTitle(step: ProgressStepId): string {
+  return step === bookStep.id ? bookStep.title : plannerSteps[stepIndex(step)].title;
 }

@@ -1,5 +1,5 @@
 import { useMemo } from 'react';
-import { Outlet } from 'react-router';
+import { Outlet, useMatch } from 'react-router';
 import { paths } from '@/config/paths';
 import { useUser } from '@/features/auth/hooks/use-user';
 import { PLANNER_STORAGE_KEY } from '@/features/planner/forms/build';
@@ -10,6 +10,7 @@ import { PlannerProvider, type PlannerConfig } from '@/features/planner/hooks/us
 export default function PlanLayoutRoute() {
   const { data: user } = useUser();
   const role = user?.role ?? null;
+  const booking = useMatch(paths.plan.book.path) !== null;
   const config = useMemo<PlannerConfig>(
     () => ({
       storageKey: PLANNER_STORAGE_KEY,
@@ -21,7 +22,7 @@ export default function PlanLayoutRoute() {
   );
   return (
     <PlannerProvider config={config}>
-      <PlannerFrame>
+      <PlannerFrame showBuild={!booking}>
         <Outlet />
       </PlannerFrame>
     </PlannerProvider>

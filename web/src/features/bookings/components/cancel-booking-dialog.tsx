@@ -1,0 +1,74 @@
+import Alert from '@mui/material/Alert';
+import Button from '@mui/material/Button';
+import CircularProgress from '@mui/material/CircularProgress';
+import Dialog from '@mui/material/Dialog';
+import DialogActions from '@mui/material/DialogActions';
+import DialogContent from '@mui/material/DialogContent';
+import DialogContentText from '@mui/material/DialogContentText';
+import DialogTitle from '@mui/material/DialogTitle';
+import { useId } from 'react';
+import { isApiError } from '@/lib/api-client';
+import type { Booking } from '@/types/api';
+import { useCancelBooking } from '../api/cancel-booking';
+import { formatLocalDateTime } from '../utils/booking-text';
+
+interface Props {
+  booking: Booking;
+  open: boolean;
+  onClose: () => void;
+}
+
+/** Asks before releasing a hold or cancelling a booking; a refusal is shown in the dialog. */
+export function CancelBookingDialog({ booking, open, onClose }: Props) {
+  const cancel = useCancelBooking();
+  const titleId = useId();
+  const textId = useId();
+  const held = booking.state === 'held';
+  const when = formatLocalDateTime(booking.startUtc, booking.timeZone);
+
+  const close = () => {
+    if (cancel.isPending) return;
+    cancel.reset();
+    onClose();
+  };
+
+  return (
+    <Dialog open={open} onClose={close} aria-labelledby={titleId} aria-describedby={textId}>
+      <DialogTitle id={titleId}>
+        {held ? 'Release this time?' : `Cancel booking ${booking.reference}?`}
+      </DialogTitle>
+      <DialogContent>
+        <DialogContentText id={textId}>
+          {held
+            ? `${when} is let go straight away, and others can book it. Your quote stays as it is, so you can book another time.`
+            : `The workshop will no longer expect your vehicle on ${when}. Your quote stays as it is. The workshop will contact you about the deposit.`}
+        </DialogContentText>
+        {cancel.isError && (
+          <Alert severity="error" sx={{ mt: 2 }}>
+            {isApiError(cancel.error)
+              ? cancel.error.message
+              : 'The booking could not be cancelled. Please try again.'}
+          </Alert>
+        )}
+      </DialogContent>
+      <DialogActions sx={{ px: 3, pb: 2, flexWrap: 'wrap', gap: 1 }}>
+        <Button onClick={close} disabled={cancel.isPending}>
+          {held ? 'Keep the time' : 'Keep the booking'}
+        </Button>
+        <Button
+          variant="contained"
+          color="error"
+          disabled={cancel.isPending}
+          onClick={() => cancel.mutate(booking.id, { onSuccess: () => onClose() })}
+          startIcon={
+            cancel.isPending ? (
+              <CircularProgress size={18} color="inherit" aria-hidden />
+            ) : undefined
+          }
+        >
+          {held ? 'Release this time' : 'Cancel booking'}
+        </Button>
+      </DialogActions>
+    </Dialog>
+  );
+}
