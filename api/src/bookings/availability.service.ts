@@ -8,6 +8,7 @@ import {
 } from '../scheduling/availability';
 import { planJob } from '../scheduling/job-plan';
 import type { JobPlan } from '../scheduling/scheduling.types';
+import { localDateOf } from '../workshop/workshop-time';
 import { WorkshopService } from '../workshop/workshop.service';
 import {
   type WorkshopCalendarSettings,
@@ -59,7 +60,7 @@ export class AvailabilityService {
   ): Promise<SchedulingContext> {
     const toDate = addLocalDays(window.fromDate, window.days + WINDOW_TAIL_DAYS);
     const settings = await this.setup.calendarFor(window.fromDate, toDate);
-    const today = await this.workshop.localDate(now);
+    const today = localDateOf(now, settings.timeZone);
     const plan = planJob(jobPlanInputOf(version, settings, today));
     const busy = await this.busy(
       em,

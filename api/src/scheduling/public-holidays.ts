@@ -52,6 +52,24 @@ export function isHolidayRegion(code: string): boolean {
   return (regions ?? []).some((region) => region.code === code);
 }
 
+/** A region's year of public holidays never changes for a given package version: kept once worked out. */
+const yearsWorkedOut = new Map<string, readonly PublicHoliday[]>();
+
+function publicHolidaysOfYear(region: string, year: number): readonly PublicHoliday[] {
+  const key = `${region}:${year}`;
+  let holidays = yearsWorkedOut.get(key);
+  if (!holidays) {
+    holidays = calendarOf(region)
+      .getHolidays(year)
+      // `date` is the local date and time the holiday starts: "2026-12-25 00:00:00".
+      .filter((holiday) => holiday.type === 'public')
+      .map((holiday) => ({ date: holiday.date.slice(0, 10), name: holiday.name }));
+    if (yearsWorkedOut.size > 500) yearsWorkedOut.clear();
+    yearsWorkedOut.set(key, holidays);
+  }
+  return holidays;
+}
+
 /**
  * The public holidays of the region from fromDate to toDate (both included), by date; a date the
  * package gives two holidays on appears twice. RangeError for an unknown region or a bad date.
@@ -59,15 +77,10 @@ export function isHolidayRegion(code: string): boolean {
 export function publicHolidays(region: string, fromDate: string, toDate: string): PublicHoliday[] {
   assertIsoDate(fromDate, 'fromDate');
   assertIsoDate(toDate, 'toDate');
-  const calendar = calendarOf(region);
   const found: PublicHoliday[] = [];
   for (let year = Number(fromDate.slice(0, 4)); year <= Number(toDate.slice(0, 4)); year += 1) {
-    for (const holiday of calendar.getHolidays(year)) {
-      // `date` is the local date and time the holiday starts: "2026-12-25 00:00:00".
-      const date = holiday.date.slice(0, 10);
-      if (holiday.type === 'public' && date >= fromDate && date <= toDate) {
-        found.push({ date, name: holiday.name });
-      }
+    for (const holiday of publicHolidaysOfYear(region, year)) {
+      if (holiday.date >= fromDate && holiday.date <= toDate) found.push(holiday);
     }
   }
   return found.sort((a, b) => (a.date < b.date ? -1 : a.date > b.date ? 1 : 0));
