@@ -4,7 +4,7 @@
  */
 import { randomBytes } from 'node:crypto';
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
-import { join } from 'node:path';
+import { dirname, join } from 'node:path';
 import { buildIfChanged } from './lib/build';
 import { log, StackError } from './lib/log';
 import { assertPortFree, waitForHttp } from './lib/ports';
@@ -87,6 +87,24 @@ interface Ports {
   app: number;
   smtp: number;
   inbox: number;
+  /** The payment provider's local stand-in (fakes/payments). */
+  payments: number;
+}
+
+/**
+ * The keys the API and the payments stand-in share: random, made once per `.data/` (like the
+ * session secret), in the provider's formats (sk_test_…, whsec_…).
+ */
+function paymentsSecrets(): { secretKey: string; webhookSecret: string } {
+  const file = join(DATA, 'payments-secrets.json');
+  if (!existsSync(file)) {
+    const secrets = {
+      secretKey: `sk_test_${randomBytes(24).toString('hex')}`,
+      webhookSecret: `whsec_${randomBytes(24).toString('hex')}`,
+    };
+    writeFileSync(file, JSON.stringify(secrets), { mode: 0o600 });
+  }
+  return JSON.parse(readFileSync(file, 'utf8')) as { secretKey: string; webhookSecret: string };
 }
 
 function apiEnv(
@@ -105,7 +123,40 @@ function apiEnv(
     WEB_DIST_DIR: join(ROOT, 'web', 'dist'),
     // Customer photos: outside the web root, one folder per database so tests start empty.
     UPLOAD_DIR: join(DATA, 'uploads', database),
+    // The provider's official SDK, pointed at the local stand-in by configuration only.
+    PAYMENTS_API_URL: `http://127.0.0.1:${ports.payments}`,
+    PAYMENTS_SECRET_KEY: paymentsSecrets().secretKey,
+    PAYMENTS_WEBHOOK_SECRET: paymentsSecrets().webhookSecret,
   };
+}
+
+/** fakes/payments: checkout sessions, a test checkout page and signed webhooks to the API. */
+async function startPayments(
+  ports: Ports,
+  stateFile: string,
+  echo: boolean,
+  varPrefix: string,
+): Promise<Service> {
+  await assertPortFree(ports.payments, `${varPrefix}PAYMENTS_PORT`, 'the payments stand-in');
+  mkdirSync(dirname(stateFile), { recursive: true });
+  const secrets = paymentsSecrets();
+  const service = startService({
+    name: 'payments',
+    command: 'npx',
+    args: ['tsx', join(ROOT, 'fakes', 'payments', 'src', 'server.ts')],
+    env: {
+      PAYMENTS_PORT: String(ports.payments),
+      PAYMENTS_HOST: '127.0.0.1',
+      PAYMENTS_SECRET_KEY: secrets.secretKey,
+      PAYMENTS_WEBHOOK_SECRET: secrets.webhookSecret,
+      PAYMENTS_WEBHOOK_URL: `http://127.0.0.1:${ports.app}/api/payments/webhook`,
+      PAYMENTS_STATE_FILE: stateFile,
+    },
+    logFile: join(DATA, 'logs', 'payments.log'),
+    echo,
+  });
+  await waitForHttp(`http://127.0.0.1:${ports.payments}/__fake/health`, 30_000, service.alive);
+  return service;
 }
 
 async function migrateAndSeed(env: NodeJS.ProcessEnv): Promise<void> {
@@ -185,7 +236,7 @@ function banner(appUrl: string, inboxUrl: string, extra: string[] = []): void {
       ([role, email, password]) => `    ${role.padEnd(9)} ${email.padEnd(30)} ${password}`,
     ),
     '',
-    '  Logs: .data/logs/ (api.log, mail.log); PostgreSQL: .data/pg/server.log',
+    '  Logs: .data/logs/ (api.log, mail.log, payments.log); PostgreSQL: .data/pg/server.log',
     '  Ctrl-C stops everything.',
     '',
   ];
@@ -231,6 +282,7 @@ async function startStack(mode: 'start' | 'dev'): Promise<never> {
     app: portFrom('PORT', 4400),
     smtp: portFrom('MAIL_SMTP_PORT', 1025),
     inbox: portFrom('MAIL_WEB_PORT', 1080),
+    payments: portFrom('PAYMENTS_PORT', 12111),
   };
   const devPort = portFrom('DEV_PORT', 5173);
   const appUrl = mode === 'dev' ? `http://127.0.0.1:${devPort}/` : `http://127.0.0.1:${ports.app}/`;
@@ -249,6 +301,7 @@ async function startStack(mode: 'start' | 'dev'): Promise<never> {
   await migrateAndSeed(env);
   const services: Service[] = [];
   services.push(await startInbox(ports, join(DATA, 'mail'), false, ''));
+  services.push(await startPayments(ports, join(DATA, 'payments', 'state.json'), false, ''));
   if (mode === 'start') {
     buildWeb();
     services.push(await startApi(env, ports, false, 'PORT'));
@@ -268,11 +321,10 @@ async function startStack(mode: 'start' | 'dev'): Promise<never> {
     );
     await waitForHttp(appUrl, 30_000, services[services.length - 1].alive);
   }
-  banner(
-    appUrl,
-    inboxUrl,
-    mode === 'dev' ? [`  API (direct):   http://127.0.0.1:${ports.app}/api`] : [],
-  );
+  banner(appUrl, inboxUrl, [
+    ...(mode === 'dev' ? [`  API (direct):   http://127.0.0.1:${ports.app}/api`] : []),
+    `  Payments:       http://127.0.0.1:${ports.payments}/ (local stand-in; test cards: 4242 4242 4242 4242 pays, 4000 0000 0000 0002 is declined)`,
+  ]);
   return untilInterrupted(services);
 }
 
@@ -300,6 +352,7 @@ async function testStack(): Promise<never> {
     app: portFrom('TEST_PORT', 4410),
     smtp: portFrom('TEST_MAIL_SMTP_PORT', 1026),
     inbox: portFrom('TEST_MAIL_WEB_PORT', 1081),
+    payments: portFrom('TEST_PAYMENTS_PORT', 12112),
   };
   const appUrl = `http://127.0.0.1:${ports.app}`;
   mkdirSync(DATA, { recursive: true });
@@ -317,6 +370,8 @@ async function testStack(): Promise<never> {
   results.push(await vitestSuite('api', 'api', testEnv));
   // The web app's unit tests (pure helpers: formatting, form rules); no server needed.
   results.push(await vitestSuite('web', 'web', {}));
+  // The payments stand-in against the provider's official SDK (it starts its own servers).
+  results.push(await vitestSuite('fakes', 'fakes', {}));
 
   try {
     buildApi();
@@ -334,11 +389,15 @@ async function testStack(): Promise<never> {
     const mailDir = join(DATA, 'mail-e2e');
     rmSync(mailDir, { recursive: true, force: true });
     await startInbox(ports, mailDir, false, 'TEST_');
+    const paymentsState = join(DATA, 'payments-e2e', 'state.json');
+    rmSync(paymentsState, { force: true });
+    await startPayments(ports, paymentsState, false, 'TEST_');
     await startApi(e2eEnv, ports, false, 'TEST_PORT');
     results.push(
       await vitestSuite('e2e', 'e2e', {
         E2E_BASE_URL: appUrl,
         E2E_INBOX_URL: `http://127.0.0.1:${ports.inbox}`,
+        E2E_PAYMENTS_URL: `http://127.0.0.1:${ports.payments}`,
         E2E_DATABASE_URL: e2eEnv.DATABASE_URL,
       }),
     );
