@@ -18,6 +18,10 @@ export default defineConfig({
       PUBLIC_URL: 'http://127.0.0.1:4400',
       // Replaced per HTTP spec by the address of the SMTP server the spec starts.
       SMTP_URL: 'smtp://127.0.0.1:2525',
+      // Test keys only; each HTTP spec's payments stand-in is started with the same two, and
+      // PAYMENTS_API_URL is set to its address by test/support/test-app.ts.
+      PAYMENTS_SECRET_KEY: 'sk_test_liftwright_api_tests',
+      PAYMENTS_WEBHOOK_SECRET: 'whsec_liftwright_api_tests',
     },
     projects: [
       // Unit specs beside the code: no database, run in parallel.

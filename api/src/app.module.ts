@@ -8,7 +8,7 @@ import {
   RequestMethod,
 } from '@nestjs/common';
 import { APP_FILTER, APP_GUARD, APP_PIPE } from '@nestjs/core';
-import { json, type RequestHandler } from 'express';
+import { json, type Request, type RequestHandler } from 'express';
 import { LoggerModule } from 'nestjs-pino';
 import { BookingsModule } from './bookings/bookings.module';
 import { AuthModule } from './auth/auth.module';
@@ -28,6 +28,8 @@ import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { createOrmConfig } from './mikro-orm.config';
+import { PaymentsModule } from './payments/payments.module';
+import { PAYMENTS_WEBHOOK_PATH } from './payments/payments-webhook.path';
 import { QuotesModule } from './quotes/quotes.module';
 import { RuleSetsModule } from './rule-sets/rule-sets.module';
 import { StaffModule } from './staff/staff.module';
@@ -38,6 +40,29 @@ import { WorkshopModule } from './workshop/workshop.module';
 
 /** Every path below the global prefix (Nest 11 / path-to-regexp 8 wildcard). */
 const ALL_ROUTES = { path: '{*path}', method: RequestMethod.ALL };
+
+/** JSON bodies of every route but the payment provider's webhook. */
+const jsonBody = json({ limit: '100kb' });
+
+/**
+ * The provider's events: parsed as JSON too, but with the exact bytes kept as `rawBody`, which
+ * the signature is checked against. Larger than ordinary requests: an event carries whole objects.
+ */
+const webhookBody = json({
+  limit: '1mb',
+  verify: (request, _response, bytes) => {
+    (request as Request & { rawBody?: Buffer }).rawBody = Buffer.from(bytes);
+  },
+});
+
+function isWebhookPath(request: Request): boolean {
+  const url = request.originalUrl;
+  const query = url.indexOf('?');
+  return (query === -1 ? url : url.slice(0, query)) === PAYMENTS_WEBHOOK_PATH;
+}
+
+const bodyParser: RequestHandler = (request, response, next) =>
+  isWebhookPath(request) ? webhookBody(request, response, next) : jsonBody(request, response, next);
 
 /**
  * Runs an Express middleware so that an error it passes to next() is thrown inside Nest and
@@ -103,6 +128,7 @@ function insideNest(handler: RequestHandler): RequestHandler {
     UploadsModule,
     CustomersModule,
     BookingsModule,
+    PaymentsModule,
   ],
   providers: [
     { provide: APP_FILTER, useClass: AllExceptionsFilter },
@@ -120,12 +146,13 @@ export class AppModule implements NestModule {
   }
 
   /**
-   * After the global request-id logger and the ORM request context: JSON bodies, the session,
+   * After the global request-id logger and the ORM request context: JSON bodies (the webhook's
+   * with its raw bytes kept), the session,
    * its absolute lifetime, then passport (which loads the user inside the request context).
    */
   configure(consumer: MiddlewareConsumer): void {
     consumer
-      .apply(...[json({ limit: '100kb' }), ...this.sessions.middleware()].map(insideNest))
+      .apply(...[bodyParser, ...this.sessions.middleware()].map(insideNest))
       .forRoutes(ALL_ROUTES);
   }
 }

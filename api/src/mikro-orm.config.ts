@@ -12,6 +12,9 @@ import { Product } from './catalogue/entities/product.entity';
 import { validateDatabaseEnvironment } from './config/environment';
 import { CustomerVehicle } from './customer-vehicles/entities/customer-vehicle.entity';
 import { MIGRATIONS } from './database/migrations-list';
+import { Payment } from './payments/entities/payment.entity';
+import { ProcessedWebhookEvent } from './payments/entities/processed-webhook-event.entity';
+import { Refund } from './payments/entities/refund.entity';
 import { QuoteLine } from './quotes/entities/quote-line.entity';
 import { QuoteVersion } from './quotes/entities/quote-version.entity';
 import { Quote } from './quotes/entities/quote.entity';
@@ -57,6 +60,9 @@ export function createOrmConfig(databaseUrl: string, { writeSnapshot = true } = 
       HolidayOverride,
       Booking,
       Reservation,
+      Payment,
+      Refund,
+      ProcessedWebhookEvent,
     ],
     forceUtcTimezone: true,
     ensureDatabase: false,

@@ -46,6 +46,16 @@ describe('configuration at start-up', () => {
       'http://127.0.0.1:1025',
       'Configuration error: SMTP_URL must be an smtp:// or smtps:// URL',
     ],
+    [
+      'PAYMENTS_WEBHOOK_SECRET',
+      undefined,
+      'Configuration error: PAYMENTS_WEBHOOK_SECRET is required',
+    ],
+    [
+      'PAYMENTS_SECRET_KEY',
+      'pk_live_abc',
+      'Configuration error: PAYMENTS_SECRET_KEY must be a secret key starting with sk_test_ or sk_live_',
+    ],
   ])('refuses to start when %s is %s', async (name, value, message) => {
     if (value === undefined) delete process.env[name];
     else process.env[name] = value;

@@ -45,6 +45,8 @@ interface Setup {
   holdMinutes: number;
   leadTimeBufferDays: number;
   fittingMinutesPerWheel: number;
+  fullRefundHoursBefore: number;
+  lateCancelRefundPercent: number;
   openingHours: OpeningHoursEntry[];
   bays: Bay[];
   closures: Closure[];
@@ -79,6 +81,8 @@ const DEMO_CALENDAR: CalendarBody = {
   holdMinutes: 15,
   leadTimeBufferDays: 1,
   fittingMinutesPerWheel: 15,
+  fullRefundHoursBefore: 48,
+  lateCancelRefundPercent: 0,
   openingHours: DEMO_WEEK,
 };
 
@@ -437,6 +441,29 @@ describe('workshop set-up (Manage → Workshop)', () => {
       expect(demo).toMatchObject(DEMO_CALENDAR);
     });
 
+    it('sets the cancellation policy with the calendar, and keeps it when left out', async () => {
+      const policy = await change('put', '/api/workshop/calendar', {
+        ...DEMO_CALENDAR,
+        fullRefundHoursBefore: 72,
+        lateCancelRefundPercent: 25,
+      });
+      expect(policy).toMatchObject({ fullRefundHoursBefore: 72, lateCancelRefundPercent: 25 });
+      const {
+        fullRefundHoursBefore: _hours,
+        lateCancelRefundPercent: _percent,
+        ...older
+      } = DEMO_CALENDAR;
+      const kept = await change('put', '/api/workshop/calendar', { ...older, holdMinutes: 20 });
+      expect(kept).toMatchObject({
+        holdMinutes: 20,
+        fullRefundHoursBefore: 72,
+        lateCancelRefundPercent: 25,
+      });
+      expect(await change('put', '/api/workshop/calendar', DEMO_CALENDAR)).toMatchObject(
+        DEMO_CALENDAR,
+      );
+    });
+
     it('refuses bad settings with field errors and changes nothing', async () => {
       const cases: Array<[object, string[]]> = [
         [{ ...DEMO_CALENDAR, timeZone: 'Nowhere/Tallowgate' }, ['timeZone']],
@@ -485,6 +512,13 @@ describe('workshop set-up (Manage → Workshop)', () => {
         ],
         [withMonday({ open: 'yes' } as unknown as OpeningHoursEntry), ['openingHours[0].open']],
         [{ ...DEMO_CALENDAR, slotStepMinutes: undefined }, ['slotStepMinutes']],
+        [{ ...DEMO_CALENDAR, fullRefundHoursBefore: -1 }, ['fullRefundHoursBefore']],
+        [{ ...DEMO_CALENDAR, fullRefundHoursBefore: 721 }, ['fullRefundHoursBefore']],
+        [{ ...DEMO_CALENDAR, fullRefundHoursBefore: 24.5 }, ['fullRefundHoursBefore']],
+        [{ ...DEMO_CALENDAR, fullRefundHoursBefore: null }, ['fullRefundHoursBefore']],
+        [{ ...DEMO_CALENDAR, lateCancelRefundPercent: 101 }, ['lateCancelRefundPercent']],
+        [{ ...DEMO_CALENDAR, lateCancelRefundPercent: -5 }, ['lateCancelRefundPercent']],
+        [{ ...DEMO_CALENDAR, lateCancelRefundPercent: '50' }, ['lateCancelRefundPercent']],
         [{ ...DEMO_CALENDAR, bays: [] }, ['bays']],
       ];
       for (const [body, fields] of cases) {

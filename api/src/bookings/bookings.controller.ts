@@ -1,5 +1,6 @@
 import { Body, Controller, Get, HttpCode, HttpStatus, Param, Post, Query } from '@nestjs/common';
 import {
+  ApiBadGatewayResponse,
   ApiBadRequestResponse,
   ApiConflictResponse,
   ApiCreatedResponse,
@@ -21,7 +22,11 @@ import {
   MoveBookingDto,
   MoveRequestDto,
 } from './dto/booking-requests.dto';
-import { BookingListResponse, BookingResponse } from './dto/booking.response';
+import {
+  BookingListResponse,
+  BookingResponse,
+  DepositCheckoutResponse,
+} from './dto/booking.response';
 
 @ApiTags('bookings')
 @Controller()
@@ -105,11 +110,41 @@ export class BookingsController {
   @Roles('customer', 'desk', 'manager')
   @Post('bookings/:id/cancel')
   @HttpCode(HttpStatus.OK)
-  @ApiOperation({ summary: 'Cancel (or release a hold): the bays are freed' })
+  @ApiOperation({
+    summary:
+      'Cancel (or release a hold): the bays are freed; a paid deposit is refunded as the cancellation policy allows',
+  })
   @ApiOkResponse({ type: BookingResponse })
   @ApiConflictResponse({ type: ErrorResponse })
+  @ApiBadGatewayResponse({
+    description: 'The refund could not be made: nothing changed',
+    type: ErrorResponse,
+  })
   cancel(@Param() params: IdParams, @CurrentUser() user: User): Promise<BookingResponse> {
     return this.bookings.cancel(params.id, user);
+  }
+
+  @Roles('customer', 'desk', 'manager')
+  @Post('bookings/:id/deposit-checkout')
+  @ApiOperation({
+    summary:
+      "The payment page for a held booking's deposit (the open one again, or a new one); the hold lasts until the page expires",
+  })
+  @ApiCreatedResponse({ type: DepositCheckoutResponse })
+  @ApiNotFoundResponse({ type: ErrorResponse })
+  @ApiConflictResponse({
+    description: 'Not held, the hold has run out, or the deposit is already paid',
+    type: ErrorResponse,
+  })
+  @ApiBadGatewayResponse({
+    description: 'The payment provider cannot be reached: nothing changed',
+    type: ErrorResponse,
+  })
+  depositCheckout(
+    @Param() params: IdParams,
+    @CurrentUser() user: User,
+  ): Promise<DepositCheckoutResponse> {
+    return this.bookings.depositCheckout(params.id, user);
   }
 
   @Roles('customer')

@@ -1,5 +1,6 @@
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { Module } from '@nestjs/common';
+import { PaymentsModule } from '../payments/payments.module';
 import { QuotesModule } from '../quotes/quotes.module';
 import { WorkshopModule } from '../workshop/workshop.module';
 import { AvailabilityService } from './availability.service';
@@ -10,7 +11,12 @@ import { Reservation } from './entities/reservation.entity';
 import { HoldSweeperService } from './hold-sweeper.service';
 
 @Module({
-  imports: [MikroOrmModule.forFeature([Booking, Reservation]), QuotesModule, WorkshopModule],
+  imports: [
+    MikroOrmModule.forFeature([Booking, Reservation]),
+    QuotesModule,
+    WorkshopModule,
+    PaymentsModule,
+  ],
   controllers: [BookingsController],
   providers: [BookingsService, AvailabilityService, HoldSweeperService],
   exports: [BookingsService, AvailabilityService, HoldSweeperService],

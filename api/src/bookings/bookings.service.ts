@@ -3,13 +3,15 @@ import { ConflictException, Injectable, NotFoundException } from '@nestjs/common
 import { FieldErrorsException } from '../common/errors/field-errors.exception';
 import { TimeTakenException } from '../common/errors/time-taken.exception';
 import { vehicleName } from '../fit-reports/fit-reports.service';
+import { paymentSummary } from '../payments/payment-summary';
+import { PaymentsService } from '../payments/payments.service';
 import { QuoteVersion } from '../quotes/entities/quote-version.entity';
 import { quoteReference } from '../quotes/quote-reference';
 import { QuotesService } from '../quotes/quotes.service';
 import { type StartOption, startOptionAt } from '../scheduling/availability';
 import type { User } from '../users/entities/user.entity';
 import { Bay } from '../workshop/entities/bay.entity';
-import { WorkshopService } from '../workshop/workshop.service';
+import { type WorkshopSettings, WorkshopService, loadWorkshop } from '../workshop/workshop.service';
 import { AvailabilityService, type BusyExclusion } from './availability.service';
 import { type BookingState, bookingReference } from './booking-states';
 import { isCalendarDate, startOptionResponse, utcIso, zonedIso } from './booking-times';
@@ -20,7 +22,11 @@ import type {
   MoveRequestDto,
 } from './dto/booking-requests.dto';
 import type { AvailabilityResponse, StartOptionResponse } from './dto/availability.response';
-import type { BookingListResponse, BookingResponse } from './dto/booking.response';
+import type {
+  BookingListResponse,
+  BookingResponse,
+  DepositCheckoutResponse,
+} from './dto/booking.response';
 import { Booking } from './entities/booking.entity';
 import { Reservation } from './entities/reservation.entity';
 import { expireLapsedHolds, isOverlapRefusal } from './holds';
@@ -46,6 +52,7 @@ const POPULATE = [
   'quoteVersion',
   'quoteVersion.quote',
   'quoteVersion.quote.vehicleModel',
+  'payments',
 ] as const;
 
 /**
@@ -60,6 +67,7 @@ export class BookingsService {
     private readonly quotes: QuotesService,
     private readonly availability: AvailabilityService,
     private readonly workshop: WorkshopService,
+    private readonly payments: PaymentsService,
   ) {}
 
   async findAvailability(query: AvailabilityQueryDto, user: User): Promise<AvailabilityResponse> {
@@ -121,13 +129,34 @@ export class BookingsService {
           `Booking ${bookingReference(booking.number)} is ${booking.state} and cannot be cancelled.`,
         );
       }
+      // The refund the policy allows is made first: if the provider fails, nothing is cancelled.
+      const now = new Date();
+      await this.payments.refundOnCancellation(em, booking, await loadWorkshop(em), now);
       booking.state = 'cancelled';
-      booking.stateChangedAt = new Date();
+      booking.stateChangedAt = now;
       booking.cancelledAt = booking.stateChangedAt;
       booking.holdExpiresAt = null;
       for (const reservation of booking.reservations) reservation.active = false;
     });
     return this.get(id, user);
+  }
+
+  /**
+   * The payment page for the deposit of a held booking (the open one again, or a new one); the
+   * hold lasts at least as long as the page takes payment.
+   */
+  async depositCheckout(id: string, user: User): Promise<DepositCheckoutResponse> {
+    const checkout = await this.em.fork().transactional(async (em) => {
+      const now = new Date();
+      await expireLapsedHolds(em, now);
+      const booking = await this.lockVisible(em, id, user);
+      return this.payments.depositCheckout(em, booking, await loadWorkshop(em), now);
+    });
+    return {
+      checkoutUrl: checkout.checkoutUrl,
+      expiresAt: utcIso(checkout.expiresAt.getTime()),
+      booking: await this.get(id, user),
+    };
   }
 
   async requestMove(id: string, dto: MoveRequestDto, user: User): Promise<BookingResponse> {
@@ -149,21 +178,22 @@ export class BookingsService {
 
   async list(user: User): Promise<BookingListResponse> {
     await expireLapsedHolds(this.em, new Date());
-    const timeZone = (await this.workshop.settings()).timeZone;
+    const settings = await this.workshop.settings();
     const bookings = await this.em
       .fork()
       .find(Booking, seesEveryBooking(user) ? {} : { customer: user.id }, {
         populate: POPULATE,
         orderBy: { createdAt: 'desc', number: 'desc' },
       });
-    return { items: bookings.map((booking) => this.toResponse(booking, timeZone)) };
+    const now = Date.now();
+    return { items: bookings.map((booking) => this.toResponse(booking, settings, now)) };
   }
 
   async get(id: string, user: User): Promise<BookingResponse> {
     await expireLapsedHolds(this.em, new Date());
-    const timeZone = (await this.workshop.settings()).timeZone;
+    const settings = await this.workshop.settings();
     const booking = await this.loadVisible(this.em.fork(), id, user);
-    return this.toResponse(booking, timeZone);
+    return this.toResponse(booking, settings, Date.now());
   }
 
   // ---- inside a transaction ---------------------------------------------------------------
@@ -236,7 +266,14 @@ export class BookingsService {
     booking.endsAt = new Date(option.endsAtMs);
     booking.plan = plan;
     if (booking.state === 'held') {
-      booking.holdExpiresAt = new Date(now.getTime() + settings.holdMinutes * 60_000);
+      // The countdown restarts, but never ends before an open payment page of the booking does.
+      const pageOpenUntil = booking.payments
+        .getItems()
+        .filter((payment) => payment.status === 'open' && payment.expiresAt > now)
+        .reduce((latest, payment) => Math.max(latest, payment.expiresAt.getTime()), 0);
+      booking.holdExpiresAt = new Date(
+        Math.max(now.getTime() + settings.holdMinutes * 60_000, pageOpenUntil),
+      );
     }
     await this.reserve(em, booking, option);
     await em.flush();
@@ -376,10 +413,20 @@ export class BookingsService {
     return this.loadVisible(em, id, user);
   }
 
-  private toResponse(booking: Booking, timeZone: string): BookingResponse {
+  private toResponse(booking: Booking, settings: WorkshopSettings, nowMs: number): BookingResponse {
+    const timeZone = settings.timeZone;
     const version = booking.quoteVersion;
     const quote = version.quote;
     const reservations = booking.reservations.getItems();
+    const money = paymentSummary({
+      state: booking.state,
+      startsAtMs: booking.startsAt.getTime(),
+      totalCents: version.totalCents,
+      depositCents: version.depositCents,
+      payments: booking.payments.getItems(),
+      policy: settings.cancellationPolicy,
+      nowMs,
+    });
     return {
       id: booking.id,
       reference: bookingReference(booking.number),
@@ -424,6 +471,7 @@ export class BookingsService {
               requestedAt: utcIso(booking.moveRequestedAt.getTime()),
             }
           : null,
+      ...money,
       createdAt: utcIso(booking.createdAt.getTime()),
     };
   }

@@ -73,4 +73,17 @@ export class AppConfigService {
   get uploadDir(): string {
     return this.config.get('UPLOAD_DIR', { infer: true });
   }
+
+  get paymentsSecretKey(): string {
+    return this.config.get('PAYMENTS_SECRET_KEY', { infer: true });
+  }
+
+  get paymentsWebhookSecret(): string {
+    return this.config.get('PAYMENTS_WEBHOOK_SECRET', { infer: true });
+  }
+
+  /** The provider's API address when it is not the provider's own (undefined: the real API). */
+  get paymentsApiUrl(): string | undefined {
+    return this.config.get('PAYMENTS_API_URL', { infer: true });
+  }
 }

@@ -14,6 +14,8 @@ const VALID = {
   SESSION_SECRET: 'a'.repeat(32),
   PUBLIC_URL: 'https://shop.liftwright.example',
   SMTP_URL: 'smtp://127.0.0.1:1025',
+  PAYMENTS_SECRET_KEY: 'sk_test_liftwrightUnitTests0123',
+  PAYMENTS_WEBHOOK_SECRET: 'whsec_liftwrightUnitTests0123',
 };
 
 describe('validateEnvironment', () => {
@@ -30,6 +32,7 @@ describe('validateEnvironment', () => {
       TRUST_PROXY: false,
     });
     expect(environment.WEB_DIST_DIR).toBeUndefined();
+    expect(environment.PAYMENTS_API_URL).toBeUndefined();
     expect(environment.UPLOAD_DIR).toBe(join(process.cwd(), '.data', 'uploads'));
     expect(defaultUploadDir()).toBe(environment.UPLOAD_DIR);
   });
@@ -100,6 +103,23 @@ describe('validateEnvironment', () => {
       { WEB_DIST_DIR: '/no/such/folder' },
       'Configuration error: WEB_DIST_DIR must be a folder that contains index.html',
     ],
+    [{ PAYMENTS_SECRET_KEY: undefined }, 'Configuration error: PAYMENTS_SECRET_KEY is required'],
+    [
+      { PAYMENTS_SECRET_KEY: 'pk_test_abc123' },
+      'Configuration error: PAYMENTS_SECRET_KEY must be a secret key starting with sk_test_ or sk_live_',
+    ],
+    [
+      { PAYMENTS_WEBHOOK_SECRET: undefined },
+      'Configuration error: PAYMENTS_WEBHOOK_SECRET is required',
+    ],
+    [
+      { PAYMENTS_WEBHOOK_SECRET: 'secret' },
+      'Configuration error: PAYMENTS_WEBHOOK_SECRET must be a webhook signing secret starting with whsec_',
+    ],
+    [
+      { PAYMENTS_API_URL: '127.0.0.1:12111' },
+      'Configuration error: PAYMENTS_API_URL must be an http:// or https:// URL',
+    ],
   ])('refuses %o with a message naming the variable', (change, message) => {
     expect(() => validateEnvironment({ ...VALID, ...change })).toThrow(message);
   });
@@ -118,6 +138,19 @@ describe('validateEnvironment', () => {
     expect(() => validateEnvironment({ ...VALID, SESSION_SECRET: '' })).toThrow(
       'SESSION_SECRET is required',
     );
+  });
+
+  it('takes the payment keys and an optional address of the provider API', () => {
+    const environment = validateEnvironment({
+      ...VALID,
+      PAYMENTS_SECRET_KEY: 'sk_live_abc_123',
+      PAYMENTS_API_URL: 'http://127.0.0.1:12111',
+    });
+    expect(environment).toMatchObject({
+      PAYMENTS_SECRET_KEY: 'sk_live_abc_123',
+      PAYMENTS_WEBHOOK_SECRET: VALID.PAYMENTS_WEBHOOK_SECRET,
+      PAYMENTS_API_URL: 'http://127.0.0.1:12111',
+    });
   });
 
   it('accepts a web app folder that has an index.html', () => {

@@ -9,6 +9,7 @@ import {
   IsNotEmpty,
   IsOptional,
   IsString,
+  Matches,
   Max,
   MinLength,
   Min,
@@ -192,6 +193,30 @@ export class Environment extends DatabaseEnvironment {
   )
   @IsWritableFolder({ message: '$property must be a folder the API can create and write to' })
   UPLOAD_DIR = defaultUploadDir();
+
+  /** The payment provider's secret API key (test or live). Never logged. */
+  @IsDefined({ message: '$property is required' })
+  @Matches(/^sk_(test|live)_[A-Za-z0-9_]+$/, {
+    message: '$property must be a secret key starting with sk_test_ or sk_live_',
+  })
+  PAYMENTS_SECRET_KEY!: string;
+
+  /** The signing secret of the webhook endpoint: events are verified with it. */
+  @IsDefined({ message: '$property is required' })
+  @Matches(/^whsec_[A-Za-z0-9_+/=-]+$/, {
+    message: '$property must be a webhook signing secret starting with whsec_',
+  })
+  PAYMENTS_WEBHOOK_SECRET!: string;
+
+  /**
+   * Where the provider's API is served, when not at its usual address: the SDK takes host, port
+   * and protocol from it. Unset: the provider's own API.
+   */
+  @IsOptional()
+  @IsUrlWithProtocol(['http:', 'https:'], {
+    message: '$property must be an http:// or https:// URL',
+  })
+  PAYMENTS_API_URL?: string;
 }
 
 type RawEnvironment = Record<string, unknown>;
@@ -233,6 +258,9 @@ const ENVIRONMENT_KEYS = [
   'HOLD_SWEEP_SECONDS',
   'TRUST_PROXY',
   'UPLOAD_DIR',
+  'PAYMENTS_SECRET_KEY',
+  'PAYMENTS_WEBHOOK_SECRET',
+  'PAYMENTS_API_URL',
 ] as const;
 
 /**

@@ -42,7 +42,8 @@ export class WorkshopSetupController {
   @Roles('manager')
   @Put('calendar')
   @ApiOperation({
-    summary: 'Replace the time zone, holiday region, booking settings and the 7 days of hours',
+    summary:
+      'Replace the time zone, holiday region, booking settings and the 7 days of hours; set the cancellation policy',
   })
   @ApiOkResponse({ type: WorkshopSetupResponse })
   @ApiBadRequestResponse({ description: NOTHING_CHANGED, type: ErrorResponse })

@@ -80,7 +80,10 @@ export class WorkshopSetupService {
     return this.setupOf(this.em, await loadWorkshop(this.em));
   }
 
-  /** Replaces the calendar settings and the week's hours (a closed day keeps no row). */
+  /**
+   * Replaces the calendar settings and the week's hours (a closed day keeps no row), and the
+   * cancellation policy's fields that are given.
+   */
   async updateCalendar(dto: UpdateWorkshopCalendarDto): Promise<WorkshopSetupResponse> {
     const errors = openingHoursFieldErrors(dto.openingHours);
     if (Object.keys(errors).length > 0) {
@@ -93,6 +96,12 @@ export class WorkshopSetupService {
       workshop.holdMinutes = dto.holdMinutes;
       workshop.leadTimeBufferDays = dto.leadTimeBufferDays;
       workshop.fittingMinutesPerWheel = dto.fittingMinutesPerWheel;
+      if (dto.fullRefundHoursBefore !== undefined) {
+        workshop.fullRefundHoursBefore = dto.fullRefundHoursBefore;
+      }
+      if (dto.lateCancelRefundPercent !== undefined) {
+        workshop.lateCancelRefundPercent = dto.lateCancelRefundPercent;
+      }
 
       const rows = await em.find(OpeningHours, {});
       for (const entry of dto.openingHours) {
@@ -357,6 +366,8 @@ export class WorkshopSetupService {
       holdMinutes: workshop.holdMinutes,
       leadTimeBufferDays: workshop.leadTimeBufferDays,
       fittingMinutesPerWheel: workshop.fittingMinutesPerWheel,
+      fullRefundHoursBefore: workshop.fullRefundHoursBefore,
+      lateCancelRefundPercent: workshop.lateCancelRefundPercent,
       openingHours: openingHoursEntriesOf(rows),
       bays: bays.map((bay) => ({
         id: bay.id,

@@ -2,6 +2,7 @@ import { LockMode } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { Injectable, InternalServerErrorException } from '@nestjs/common';
 import { FieldErrorsException } from '../common/errors/field-errors.exception';
+import type { CancellationPolicy } from '../pricing/cancellation-refund';
 import type { PricingPolicy } from '../pricing/pricing.types';
 import { PolicyResponse } from './dto/policy.response';
 import type { UpdatePolicyDto } from './dto/update-policy.dto';
@@ -10,11 +11,12 @@ import { Workshop } from './entities/workshop.entity';
 import { assignPolicy, policyFieldErrors, pricingPolicyOf } from './policy-mapping';
 import { endOfLocalDay, localDateOf } from './workshop-time';
 
-/** The card, the engine's policy and the time zone, read together (one query). */
+/** The card, the engine's policy, the time zone and the cancellation policy, read together (one query). */
 export interface WorkshopSettings {
   card: WorkshopCardResponse;
   pricingPolicy: PricingPolicy;
   timeZone: string;
+  cancellationPolicy: CancellationPolicy;
 }
 
 /**
@@ -46,6 +48,10 @@ export function settingsOf(workshop: Workshop): WorkshopSettings {
     card: WorkshopCardResponse.from(workshop),
     pricingPolicy: pricingPolicyOf(workshop),
     timeZone: workshop.timeZone,
+    cancellationPolicy: {
+      fullRefundHoursBefore: workshop.fullRefundHoursBefore,
+      lateCancelRefundPercent: workshop.lateCancelRefundPercent,
+    },
   };
 }
 

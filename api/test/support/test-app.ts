@@ -1,10 +1,13 @@
 import { mkdtempSync, rmSync } from 'node:fs';
+import type { Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import { Pool } from 'pg';
 import { createApp } from '../../src/create-app';
 import { Mailbox } from './mailbox';
+import { type PaymentsStandIn, startPaymentsStandIn } from './payments-stand-in';
 import { testDatabaseUrl } from './test-database';
 
 export interface TestApp {
@@ -12,6 +15,8 @@ export interface TestApp {
   /** The HTTP server to hand to supertest. */
   server: ReturnType<NestExpressApplication['getHttpServer']>;
   mailbox: Mailbox;
+  /** The payments stand-in the API talks to (PAYMENTS_API_URL), its webhooks come back here. */
+  payments: PaymentsStandIn;
   /** Direct database access, to look at or age rows the API wrote. */
   db: Pool;
   close(): Promise<void>;
@@ -19,26 +24,34 @@ export interface TestApp {
 
 /**
  * The real application (createApp(), as main.ts runs it) against the migrated test database,
- * sending e-mail to a local SMTP server started here (SMTP_URL points at it).
+ * sending e-mail to a local SMTP server started here (SMTP_URL points at it) and taking payments
+ * through the payments stand-in started here in-process (PAYMENTS_API_URL points at it). The
+ * application listens on a free loopback port, so the stand-in can deliver its webhooks.
  */
 export async function startTestApp(): Promise<TestApp> {
   const mailbox = new Mailbox();
   await mailbox.start();
   process.env.SMTP_URL = mailbox.url;
+  const payments = await startPaymentsStandIn();
+  process.env.PAYMENTS_API_URL = payments.apiUrl;
   // Photos go to a folder of this run (a spec may set its own UPLOAD_DIR to look into it).
   const ownUploadDir = process.env.UPLOAD_DIR
     ? undefined
     : mkdtempSync(join(tmpdir(), 'liftwright-test-uploads-'));
   if (ownUploadDir) process.env.UPLOAD_DIR = ownUploadDir;
   const app = await createApp();
-  await app.init();
+  await app.listen(0, '127.0.0.1');
+  const { port } = (app.getHttpServer() as Server).address() as AddressInfo;
+  payments.relay.target = `http://127.0.0.1:${port}`;
   const db = new Pool({ connectionString: testDatabaseUrl(), max: 2 });
   return {
     app,
     server: app.getHttpServer(),
     mailbox,
+    payments,
     db,
     async close() {
+      await payments.close();
       await app.close();
       await db.end();
       await mailbox.stop();

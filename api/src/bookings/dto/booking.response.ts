@@ -1,5 +1,9 @@
 import { ApiProperty } from '@nestjs/swagger';
 import { BAY_KINDS, type BayKind } from '../../catalogue/product-kinds';
+import {
+  BookingPaymentResponse,
+  CancellationPolicyResponse,
+} from '../../payments/dto/payment.response';
 import { BOOKING_STATES, type BookingState } from '../booking-states';
 
 /** One stay in one bay: in UTC and in the workshop's zone. */
@@ -113,8 +117,48 @@ export class BookingResponse {
   @ApiProperty({ type: MoveRequestResponse, nullable: true })
   moveRequest!: MoveRequestResponse | null;
 
+  @ApiProperty({
+    type: [BookingPaymentResponse],
+    description: 'Checkout sessions of the booking, oldest first (open, paid, expired, failed)',
+  })
+  payments!: BookingPaymentResponse[];
+
+  @ApiProperty({ example: 100000, description: "Integer cents: the quote version's deposit" })
+  depositDueCents!: number;
+
+  @ApiProperty({ example: 0, description: 'Integer cents: deposit payments received' })
+  depositPaidCents!: number;
+
+  @ApiProperty({ example: 0, description: 'Integer cents: given back, all payments together' })
+  refundedCents!: number;
+
+  @ApiProperty({
+    example: 412345,
+    description:
+      'Integer cents still to pay: the total minus (paid minus refunded); 0 for a cancelled or expired booking',
+  })
+  balanceDueCents!: number;
+
+  @ApiProperty({ type: CancellationPolicyResponse })
+  cancellationPolicy!: CancellationPolicyResponse;
+
   @ApiProperty({ format: 'date-time' })
   createdAt!: string;
+}
+
+/** POST /api/bookings/:id/deposit-checkout: where to send the customer to pay. */
+export class DepositCheckoutResponse {
+  @ApiProperty({
+    example: 'https://pay.example/pay/cs_test_…',
+    description: "The payment provider's hosted page for this booking's deposit",
+  })
+  checkoutUrl!: string;
+
+  @ApiProperty({ format: 'date-time', description: 'The page stops taking payment then' })
+  expiresAt!: string;
+
+  @ApiProperty({ type: () => BookingResponse })
+  booking!: BookingResponse;
 }
 
 export class BookingListResponse {

@@ -2,6 +2,7 @@ import { Collection, Entity, Enum, ManyToOne, OneToMany, Property } from '@mikro
 import { BaseEntity } from '../../database/base.entity';
 import { QuoteVersion } from '../../quotes/entities/quote-version.entity';
 import type { BayKind } from '../../catalogue/product-kinds';
+import { Payment } from '../../payments/entities/payment.entity';
 import { User } from '../../users/entities/user.entity';
 import { BOOKING_STATES, type BookingState } from '../booking-states';
 import { Reservation } from './reservation.entity';
@@ -71,6 +72,10 @@ export class Booking extends BaseEntity<
     orderBy: { startsAt: 'asc' },
   })
   reservations = new Collection<Reservation>(this);
+
+  /** Checkout sessions of the booking (deposit and top-ups), in order of attempt. */
+  @OneToMany(() => Payment, (payment) => payment.booking, { orderBy: { attempt: 'asc' } })
+  payments = new Collection<Payment>(this);
 
   constructor(fields: {
     customer: User;

@@ -9,6 +9,7 @@ import { csrfSync } from 'csrf-sync';
 import type { Request } from 'express';
 import { COMPUTES_ONLY_KEY } from '../decorators/computes-only.decorator';
 import { IS_PUBLIC_KEY } from '../decorators/public.decorator';
+import { SIGNED_BY_PROVIDER_KEY } from '../decorators/signed-by-provider.decorator';
 
 export const CSRF_HEADER = 'x-csrf-token';
 export const CSRF_ERROR_MESSAGE = 'Missing or invalid CSRF token';
@@ -35,7 +36,9 @@ export function issueCsrfToken(request: Request, renew = false): string {
 
 /**
  * Global guard: a state-changing request without the session's token is refused with 403. A
- * public route marked @ComputesOnly() (it writes nothing) needs no token.
+ * public route marked @ComputesOnly() (it writes nothing) needs no token, nor does a public
+ * route marked @SignedByProvider() (a server-to-server call that proves itself by a signature
+ * over its body, which its handler verifies).
  */
 @Injectable()
 export class CsrfGuard implements CanActivate {
@@ -46,9 +49,11 @@ export class CsrfGuard implements CanActivate {
     const request = context.switchToHttp().getRequest<Request>();
     if (SAFE_METHODS.has(request.method)) return true;
     const targets = [context.getHandler(), context.getClass()];
+    const isPublic = this.reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, targets) === true;
     if (
-      this.reflector.getAllAndOverride<boolean>(COMPUTES_ONLY_KEY, targets) === true &&
-      this.reflector.getAllAndOverride<boolean>(IS_PUBLIC_KEY, targets) === true
+      isPublic &&
+      (this.reflector.getAllAndOverride<boolean>(COMPUTES_ONLY_KEY, targets) === true ||
+        this.reflector.getAllAndOverride<boolean>(SIGNED_BY_PROVIDER_KEY, targets) === true)
     ) {
       return true;
     }

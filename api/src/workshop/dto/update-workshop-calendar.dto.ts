@@ -6,6 +6,7 @@ import {
   IsArray,
   IsIn,
   IsOptional,
+  ValidateIf,
   ValidateNested,
 } from 'class-validator';
 import { BooleanField, WholeNumberInRange } from '../../common/decorators/field-validators';
@@ -50,7 +51,10 @@ export class OpeningHoursEntryDto {
   breakEndsAt?: string | null;
 }
 
-/** PUT /api/workshop/calendar: the calendar settings and the week's hours, all at once. */
+/**
+ * PUT /api/workshop/calendar: the calendar settings and the week's hours, all at once, and the
+ * cancellation policy (each of its two fields optional: left out, it stays as it is).
+ */
 export class UpdateWorkshopCalendarDto {
   @Required()
   @KnownTimeZone()
@@ -81,6 +85,30 @@ export class UpdateWorkshopCalendarDto {
   @WholeNumberInRange(0, 120, 'minutes')
   @ApiProperty({ minimum: 0, maximum: 120, example: 15 })
   fittingMinutesPerWheel!: number;
+
+  /** Left out: unchanged (null is refused). */
+  @ValidateIf((_dto, value) => value !== undefined)
+  @WholeNumberInRange(0, 720, 'hours')
+  @ApiPropertyOptional({
+    minimum: 0,
+    maximum: 720,
+    example: 48,
+    description:
+      'Cancelled at least this many hours before the start: the whole deposit back (left out: unchanged)',
+  })
+  fullRefundHoursBefore?: number;
+
+  /** Left out: unchanged (null is refused). */
+  @ValidateIf((_dto, value) => value !== undefined)
+  @WholeNumberInRange(0, 100, '%')
+  @ApiPropertyOptional({
+    minimum: 0,
+    maximum: 100,
+    example: 0,
+    description:
+      'Cancelled later: this percentage of the deposit back, rounded down to the cent; 0: none (left out: unchanged)',
+  })
+  lateCancelRefundPercent?: number;
 
   @Required()
   @IsArray({ message: SEVEN_DAYS_MESSAGE })

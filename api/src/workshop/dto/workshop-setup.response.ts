@@ -100,6 +100,20 @@ export class WorkshopSetupResponse {
   @ApiProperty({ example: 15, description: 'Bay minutes to mount, balance and fit one wheel' })
   fittingMinutesPerWheel!: number;
 
+  @ApiProperty({
+    example: 48,
+    description: 'Cancelled at least this many hours before the start: the whole deposit back',
+  })
+  fullRefundHoursBefore!: number;
+
+  @ApiProperty({
+    example: 0,
+    minimum: 0,
+    maximum: 100,
+    description: 'Cancelled later: this percentage of the deposit back (rounded down); 0: none',
+  })
+  lateCancelRefundPercent!: number;
+
   @ApiProperty({ type: [OpeningHoursEntryResponse], description: 'Always 7, Monday first' })
   openingHours!: OpeningHoursEntryResponse[];
 

@@ -1,4 +1,4 @@
-import { Entity, Enum, Property } from '@mikro-orm/core';
+import { Check, Entity, Enum, Property } from '@mikro-orm/core';
 import { BaseEntity } from '../../database/base.entity';
 import {
   type PricingProductKind,
@@ -24,12 +24,22 @@ export interface WorkshopCardFields {
  * Policies). Percentages are stored as whole basis points (1000 = 10 %), money as integer cents.
  */
 @Entity()
+@Check({
+  name: 'workshop_full_refund_hours_before_check',
+  expression: 'full_refund_hours_before >= 0',
+})
+@Check({
+  name: 'workshop_late_cancel_refund_percent_check',
+  expression: 'late_cancel_refund_percent >= 0 and late_cancel_refund_percent <= 100',
+})
 export class Workshop extends BaseEntity<
   | 'holidayRegion'
   | 'slotStepMinutes'
   | 'holdMinutes'
   | 'leadTimeBufferDays'
   | 'fittingMinutesPerWheel'
+  | 'fullRefundHoursBefore'
+  | 'lateCancelRefundPercent'
 > {
   @Property({ type: 'string', length: 120 })
   name!: string;
@@ -116,4 +126,14 @@ export class Workshop extends BaseEntity<
   /** Bay time to mount, balance and fit one wheel (tyre bay, or the hoist when there is one). */
   @Property({ type: 'smallint', default: 15 })
   fittingMinutesPerWheel: number = 15;
+
+  // ---- Cancellation policy (Manage → Workshop, with the calendar) ----
+
+  /** A booking cancelled at least this many hours before its start gets its deposit back in full. */
+  @Property({ type: 'smallint', default: 48 })
+  fullRefundHoursBefore: number = 48;
+
+  /** Cancelled later than that: this percentage of the deposit comes back (0 to 100; 0: none). */
+  @Property({ type: 'smallint', default: 0 })
+  lateCancelRefundPercent: number = 0;
 }
