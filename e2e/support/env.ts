@@ -10,6 +10,11 @@ function required(name: string): string {
 
 export const baseUrl = required('E2E_BASE_URL').replace(/\/$/, '');
 export const inboxUrl = (process.env.E2E_INBOX_URL ?? '').replace(/\/$/, '');
+/**
+ * The payments stand-in's own origin (its hosted checkout page), when the stack names it;
+ * without it a journey only checks that the checkout page is on another origin.
+ */
+export const paymentsUrl = (process.env.E2E_PAYMENTS_URL ?? '').replace(/\/$/, '');
 export const artifactsDir = new URL('../artifacts/', import.meta.url).pathname;
 
 /** The demo accounts loaded by the seeder (fictional). */

@@ -4,28 +4,13 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { checkAccessibility, waitForAnimations, type AxeFinding } from '../support/axe';
 import { launchBrowser, newPage, screenshot } from '../support/browser';
+import { findBookablePackage } from '../support/booking-setup';
 import { artifactsDir, demoUsers } from '../support/env';
 import { getJson, mainNavigation, postJson, signIn } from '../support/session';
 
 const JOURNEY = 'book-a-time';
 
 type BayKind = 'hoist' | 'alignment' | 'tyre';
-
-interface PlannerOption {
-  product: { id: string; kind: string };
-  verdict: 'ok' | 'advisory' | 'needs-certification' | 'does-not-fit';
-  suggestedBy: string[];
-}
-
-interface OptionsAnswer {
-  items: PlannerOption[];
-  suggestedAdditions: { role: string; required: boolean }[];
-}
-
-interface VehicleModel {
-  id: string;
-  yearTo: number;
-}
 
 interface Quote {
   id: string;
@@ -93,55 +78,6 @@ function clockPattern(text: string): RegExp {
   return new RegExp(`^${text.replace(/\s+/g, '\\s*')}$`, 'i');
 }
 
-const selectable = (option: PlannerOption) => option.verdict !== 'does-not-fit';
-
-/**
- * A package with workshop time in it (a lift kit, wheels and tyres, and the parts the fit
- * report requires with them, as the planner's add-ons step puts in), from the live demo
- * catalogue: the first vehicle for which all of it fits.
- */
-async function findPackage(page: Page) {
-  const models = await getJson<{ items: VehicleModel[] }>(page, '/api/vehicle-models');
-  expect(models.status).toBe(200);
-  const options = async (vehicleModelId: string, items: unknown[], kind: string) => {
-    const answer = await postJson<OptionsAnswer>(page, '/api/planner/options', {
-      vehicleModelId,
-      constantLoadKg: 0,
-      items,
-      kind,
-    });
-    expect(answer.status, `planner options for ${kind}`).toBe(200);
-    return answer.body;
-  };
-  for (const vehicle of models.body.items) {
-    const items: { productId: string; quantity: number }[] = [];
-    for (const [kind, quantity] of [
-      ['suspension-kit', 1],
-      ['wheel', 4],
-      ['tyre', 4],
-    ] as const) {
-      const option = (await options(vehicle.id, items, kind)).items.find(selectable);
-      if (!option) break;
-      items.push({ productId: option.product.id, quantity });
-    }
-    if (items.length !== 3) continue;
-    for (const kind of ['component', 'service']) {
-      const answer = await options(vehicle.id, items, kind);
-      for (const { role } of answer.suggestedAdditions.filter((s) => s.required)) {
-        const extra = answer.items.find(
-          (option) =>
-            selectable(option) &&
-            option.suggestedBy.includes(role) &&
-            !items.some((item) => item.productId === option.product.id),
-        );
-        if (extra) items.push({ productId: extra.product.id, quantity: 1 });
-      }
-    }
-    return { vehicle, items };
-  }
-  throw new Error('The demo catalogue has no vehicle with a fitting kit, wheels and tyres');
-}
-
 let browser: Browser;
 const findings: AxeFinding[] = [];
 beforeAll(async () => {
@@ -188,7 +124,7 @@ describe('a customer books a time for a saved quote', () => {
         name: 'Kit Booker',
       });
       expect(registered.status).toBe(201);
-      const { vehicle, items } = await findPackage(page);
+      const { vehicle, items } = await findBookablePackage(page);
       const saved = await postJson<Quote>(page, '/api/quotes', {
         vehicleModelId: vehicle.id,
         vehicleYear: vehicle.yearTo,

@@ -246,6 +246,10 @@ async function startApi(): Promise<void> {
       // Nothing this benchmark does sends mail.
       SMTP_URL: 'smtp://127.0.0.1:1',
       UPLOAD_DIR,
+      // Availability takes no payment: keys of the right form, and no provider behind them.
+      PAYMENTS_SECRET_KEY: `sk_test_${randomBytes(12).toString('hex')}`,
+      PAYMENTS_WEBHOOK_SECRET: `whsec_${randomBytes(12).toString('hex')}`,
+      PAYMENTS_API_URL: 'http://127.0.0.1:1',
       LOG_LEVEL: 'warn',
       WEB_DIST_DIR: '',
     },

@@ -117,6 +117,14 @@ export function createAppRouter(queryClient: QueryClient) {
               path: paths.account.booking.path,
               lazy: lazy(() => import('./routes/account/booking')),
             },
+            {
+              path: paths.account.bookingPaid.path,
+              lazy: lazy(() => import('./routes/account/booking-paid')),
+            },
+            {
+              path: paths.account.bookingDepositCancelled.path,
+              lazy: lazy(() => import('./routes/account/booking-deposit-cancelled')),
+            },
             notFound(),
           ]),
         },

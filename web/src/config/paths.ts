@@ -47,6 +47,17 @@ export const paths = {
       path: '/account/bookings/:bookingId',
       getHref: (bookingId: string) => `/account/bookings/${encodeURIComponent(bookingId)}`,
     },
+    /** Where the payment provider sends the customer after paying the deposit. */
+    bookingPaid: {
+      path: '/account/bookings/:bookingId/paid',
+      getHref: (bookingId: string) => `/account/bookings/${encodeURIComponent(bookingId)}/paid`,
+    },
+    /** Where the payment provider sends the customer who left its page without paying. */
+    bookingDepositCancelled: {
+      path: '/account/bookings/:bookingId/deposit-cancelled',
+      getHref: (bookingId: string) =>
+        `/account/bookings/${encodeURIComponent(bookingId)}/deposit-cancelled`,
+    },
   },
   desk: {
     home: { path: '/desk', getHref: () => '/desk' },

@@ -493,7 +493,7 @@ export interface paths {
       cookie?: never;
     };
     get?: never;
-    /** Replace the time zone, holiday region, booking settings and the 7 days of hours */
+    /** Replace the time zone, holiday region, booking settings and the 7 days of hours; set the cancellation policy */
     put: operations['WorkshopSetupController_updateCalendar'];
     post?: never;
     delete?: never;
@@ -873,8 +873,25 @@ export interface paths {
     };
     get?: never;
     put?: never;
-    /** Cancel (or release a hold): the bays are freed */
+    /** Cancel (or release a hold): the bays are freed; a paid deposit is refunded as the cancellation policy allows */
     post: operations['BookingsController_cancel'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/bookings/{id}/deposit-checkout': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** The payment page for a held booking's deposit (the open one again, or a new one); the hold lasts until the page expires */
+    post: operations['BookingsController_depositCheckout'];
     delete?: never;
     options?: never;
     head?: never;
@@ -892,6 +909,23 @@ export interface paths {
     put?: never;
     /** Ask the workshop to move a requested or confirmed booking */
     post: operations['BookingsController_requestMove'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/payments/webhook': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** The payment provider's events (server to server: no session or CSRF token; verified by the signature over the raw body, at most 300 s old). Each event id is handled once; a repeat answers 200 and changes nothing. */
+    post: operations['PaymentsController_receive'];
     delete?: never;
     options?: never;
     head?: never;
@@ -2082,6 +2116,16 @@ export interface components {
        * @example 15
        */
       fittingMinutesPerWheel: number;
+      /**
+       * @description Cancelled at least this many hours before the start: the whole deposit back
+       * @example 48
+       */
+      fullRefundHoursBefore: number;
+      /**
+       * @description Cancelled later: this percentage of the deposit back (rounded down); 0: none
+       * @example 0
+       */
+      lateCancelRefundPercent: number;
       /** @description Always 7, Monday first */
       openingHours: components['schemas']['OpeningHoursEntryResponse'][];
       /** @description By position */
@@ -2130,6 +2174,16 @@ export interface components {
       leadTimeBufferDays: number;
       /** @example 15 */
       fittingMinutesPerWheel: number;
+      /**
+       * @description Cancelled at least this many hours before the start: the whole deposit back (left out: unchanged)
+       * @example 48
+       */
+      fullRefundHoursBefore?: number;
+      /**
+       * @description Cancelled later: this percentage of the deposit back, rounded down to the cent; 0: none (left out: unchanged)
+       * @example 0
+       */
+      lateCancelRefundPercent?: number;
       openingHours: components['schemas']['OpeningHoursEntryDto'][];
     };
     CreateBayDto: {
@@ -2682,6 +2736,50 @@ export interface components {
       /** Format: date-time */
       requestedAt: string;
     };
+    /** @enum {string} */
+    PaymentKind: 'deposit' | 'top-up';
+    /** @enum {string} */
+    PaymentStatus: 'open' | 'paid' | 'expired' | 'failed';
+    BookingPaymentResponse: {
+      /** Format: uuid */
+      id: string;
+      kind: components['schemas']['PaymentKind'];
+      status: components['schemas']['PaymentStatus'];
+      /**
+       * @description Integer cents
+       * @example 100000
+       */
+      amountCents: number;
+      /**
+       * @description ISO 4217, lower case
+       * @example aud
+       */
+      currency: string;
+      /** Format: date-time */
+      paidAt: string | null;
+      /**
+       * @description Integer cents given back so far
+       * @example 0
+       */
+      refundedCents: number;
+    };
+    CancellationPolicyResponse: {
+      /**
+       * @description Cancelled at least this many hours before the start: the whole deposit back
+       * @example 48
+       */
+      fullRefundHoursBefore: number;
+      /**
+       * @description Cancelled later: this percentage of the deposit back (rounded down to the cent)
+       * @example 0
+       */
+      lateCancelRefundPercent: number;
+      /**
+       * @description Integer cents the customer would get back if the booking were cancelled at this moment (0 when nothing is paid or it cannot be cancelled)
+       * @example 100000
+       */
+      refundIfCancelledNowCents: number;
+    };
     BookingResponse: {
       /** Format: uuid */
       id: string;
@@ -2703,6 +2801,29 @@ export interface components {
       quote: components['schemas']['BookingQuoteSummaryResponse'];
       customer: components['schemas']['BookingCustomerResponse'];
       moveRequest: components['schemas']['MoveRequestResponse'] | null;
+      /** @description Checkout sessions of the booking, oldest first (open, paid, expired, failed) */
+      payments: components['schemas']['BookingPaymentResponse'][];
+      /**
+       * @description Integer cents: the quote version's deposit
+       * @example 100000
+       */
+      depositDueCents: number;
+      /**
+       * @description Integer cents: deposit payments received
+       * @example 0
+       */
+      depositPaidCents: number;
+      /**
+       * @description Integer cents: given back, all payments together
+       * @example 0
+       */
+      refundedCents: number;
+      /**
+       * @description Integer cents still to pay: the total minus (paid minus refunded); 0 for a cancelled or expired booking
+       * @example 412345
+       */
+      balanceDueCents: number;
+      cancellationPolicy: components['schemas']['CancellationPolicyResponse'];
       /** Format: date-time */
       createdAt: string;
     };
@@ -2719,9 +2840,31 @@ export interface components {
       /** @example 2026-12-02T20:30:00.000Z */
       start: string;
     };
+    DepositCheckoutResponse: {
+      /**
+       * @description The payment provider's hosted page for this booking's deposit
+       * @example https://pay.example/pay/cs_test_…
+       */
+      checkoutUrl: string;
+      /**
+       * Format: date-time
+       * @description The page stops taking payment then
+       */
+      expiresAt: string;
+      booking: components['schemas']['BookingResponse'];
+    };
     MoveRequestDto: {
       /** @example Could it be the Thursday after? */
       note: string;
+    };
+    WebhookReceivedResponse: {
+      /** @example true */
+      received: boolean;
+      /**
+       * @description True: this event had been handled before; nothing changed
+       * @example false
+       */
+      duplicate: boolean;
     };
   };
   responses: never;
@@ -5920,6 +6063,80 @@ export interface operations {
           'application/json': components['schemas']['ErrorResponse'];
         };
       };
+      /** @description The refund could not be made: nothing changed */
+      502: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_depositCheckout: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['DepositCheckoutResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not held, the hold has run out, or the deposit is already paid */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description The payment provider cannot be reached: nothing changed */
+      502: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
     };
   };
   BookingsController_requestMove: {
@@ -5964,6 +6181,37 @@ export interface operations {
         };
       };
       409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  PaymentsController_receive: {
+    parameters: {
+      query?: never;
+      header: {
+        /** @description t=<unix time>,v1=<HMAC> */
+        'stripe-signature': string;
+      };
+      path?: never;
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['WebhookReceivedResponse'];
+        };
+      };
+      /** @description Missing, stale or non-matching signature: nothing recorded */
+      400: {
         headers: {
           [name: string]: unknown;
         };

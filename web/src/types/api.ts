@@ -188,6 +188,16 @@ export type CreateBookingRequest = Schemas['CreateBookingDto'];
 export type MoveBookingRequest = Schemas['MoveBookingDto'];
 export type AskToMoveRequest = Schemas['MoveRequestDto'];
 
+// ---- Deposits and refunds ------------------------------------------------------------------
+/** One payment of a booking (a deposit or a top-up), as the provider reported it. */
+export type BookingPayment = Schemas['BookingPaymentResponse'];
+export type PaymentKind = Schemas['PaymentKind'];
+export type PaymentStatus = Schemas['PaymentStatus'];
+/** The workshop's cancellation rule, and what cancelling this booking now would refund. */
+export type CancellationPolicy = Schemas['CancellationPolicyResponse'];
+/** 201 from POST /api/bookings/:id/deposit-checkout: where to pay, and the booking held on. */
+export type DepositCheckout = Schemas['DepositCheckoutResponse'];
+
 /** GET /api/availability query string. */
 export interface AvailabilityQuery {
   quoteVersionId: string;

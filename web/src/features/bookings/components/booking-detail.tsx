@@ -7,7 +7,7 @@ import Link from '@mui/material/Link';
 import Typography from '@mui/material/Typography';
 import EditCalendarOutlined from '@mui/icons-material/EditCalendarOutlined';
 import EventBusyOutlined from '@mui/icons-material/EventBusyOutlined';
-import { useId, useState, type ReactNode } from 'react';
+import { useId, useState } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
 import { formatCents } from '@/lib/money';
@@ -17,7 +17,10 @@ import { bookingStateDescriptions, formatLocalDateTime } from '../utils/booking-
 import { AskToMoveDialog } from './ask-to-move-dialog';
 import { BookingStateChip } from './booking-state-chip';
 import { CancelBookingDialog } from './cancel-booking-dialog';
+import { DetailList, DetailRow } from './detail-list';
 import { HoldCountdown } from './hold-countdown';
+import { PayDeposit } from './pay-deposit';
+import { PaymentsSummary } from './payments-summary';
 import { PickAnotherTimeDialog } from './pick-another-time-dialog';
 import { StartDetails } from './start-details';
 
@@ -31,22 +34,10 @@ interface Props {
 
 type OpenDialog = 'move' | 'release' | 'ask-to-move' | 'cancel' | null;
 
-function Row({ label, value }: { label: string; value: ReactNode }) {
-  return (
-    <Box sx={{ display: 'contents' }}>
-      <Box component="dt" sx={{ color: 'text.secondary' }}>
-        {label}
-      </Box>
-      <Box component="dd" sx={{ m: 0 }}>
-        {value}
-      </Box>
-    </Box>
-  );
-}
-
 /**
- * One booking: its state in words (with a live countdown while held), its times and bays on
- * the workshop's clock, the quote it is for, and what the customer can do with it now.
+ * One booking: its state in words (with a live countdown while held, and the deposit to pay),
+ * its times and bays on the workshop's clock, its payments, the quote it is for, and what the
+ * customer can do with it now.
  */
 export function BookingDetail({ booking, quoteHref, onHoldExpired }: Props) {
   const [dialog, setDialog] = useState<OpenDialog>(null);
@@ -54,6 +45,7 @@ export function BookingDetail({ booking, quoteHref, onHoldExpired }: Props) {
   const statusHeadingId = useId();
   const timesHeadingId = useId();
   const quoteHeadingId = useId();
+  const paymentsHeadingId = useId();
   const held = booking.state === 'held';
   const holdRunning = held && booking.holdExpiresAt !== null;
   // Ticks each second only while a hold runs, to hide the hold's actions as it runs out.
@@ -62,6 +54,11 @@ export function BookingDetail({ booking, quoteHref, onHoldExpired }: Props) {
     held && booking.holdExpiresAt !== null && Date.parse(booking.holdExpiresAt) <= now;
   const movable = booking.state === 'requested' || booking.state === 'confirmed';
   const bookAgain = booking.state === 'expired' || holdOver;
+  const depositToPay =
+    held &&
+    !holdOver &&
+    booking.depositDueCents > 0 &&
+    booking.depositPaidCents < booking.depositDueCents;
   const close = () => setDialog(null);
 
   return (
@@ -90,11 +87,12 @@ export function BookingDetail({ booking, quoteHref, onHoldExpired }: Props) {
               Your request was sent to the workshop.
             </Alert>
           )}
+          {depositToPay && <PayDeposit booking={booking} />}
           <Box sx={{ display: 'flex', gap: 1, flexWrap: 'wrap' }}>
             {held && !holdOver && (
               <>
                 <Button
-                  variant="contained"
+                  variant={depositToPay ? 'outlined' : 'contained'}
                   startIcon={<EditCalendarOutlined aria-hidden />}
                   onClick={() => setDialog('move')}
                 >
@@ -156,22 +154,22 @@ export function BookingDetail({ booking, quoteHref, onHoldExpired }: Props) {
         </CardContent>
       </Card>
 
+      <Card component="section" aria-labelledby={paymentsHeadingId}>
+        <CardContent>
+          <Typography id={paymentsHeadingId} variant="h2" sx={{ fontSize: '1.2rem', mb: 1.5 }}>
+            Payments
+          </Typography>
+          <PaymentsSummary booking={booking} />
+        </CardContent>
+      </Card>
+
       <Card component="section" aria-labelledby={quoteHeadingId}>
         <CardContent>
           <Typography id={quoteHeadingId} variant="h2" sx={{ fontSize: '1.2rem', mb: 1.5 }}>
             The quote
           </Typography>
-          <Box
-            component="dl"
-            sx={{
-              m: 0,
-              display: 'grid',
-              gridTemplateColumns: 'max-content minmax(0, 1fr)',
-              columnGap: 2,
-              rowGap: 0.75,
-            }}
-          >
-            <Row
+          <DetailList>
+            <DetailRow
               label="Quote"
               value={
                 <Link component={RouterLink} to={quoteHref}>
@@ -179,10 +177,13 @@ export function BookingDetail({ booking, quoteHref, onHoldExpired }: Props) {
                 </Link>
               }
             />
-            <Row label="Vehicle" value={booking.quote.vehicleName} />
-            <Row label="Total" value={<strong>{formatCents(booking.quote.totalCents)}</strong>} />
-            <Row label="Deposit" value={formatCents(booking.quote.depositCents)} />
-          </Box>
+            <DetailRow label="Vehicle" value={booking.quote.vehicleName} />
+            <DetailRow
+              label="Total"
+              value={<strong>{formatCents(booking.quote.totalCents)}</strong>}
+            />
+            <DetailRow label="Deposit" value={formatCents(booking.quote.depositCents)} />
+          </DetailList>
         </CardContent>
       </Card>
 

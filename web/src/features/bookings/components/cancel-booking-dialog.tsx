@@ -6,11 +6,14 @@ import DialogActions from '@mui/material/DialogActions';
 import DialogContent from '@mui/material/DialogContent';
 import DialogContentText from '@mui/material/DialogContentText';
 import DialogTitle from '@mui/material/DialogTitle';
+import Typography from '@mui/material/Typography';
 import { useId } from 'react';
 import { isApiError } from '@/lib/api-client';
+import { cancellationPolicyText, refundNowText } from '@/lib/cancellation-policy';
 import type { Booking } from '@/types/api';
 import { useCancelBooking } from '../api/cancel-booking';
 import { formatLocalDateTime } from '../utils/booking-text';
+import { depositHeldCents, openPayment } from '../utils/payment-text';
 
 interface Props {
   booking: Booking;
@@ -18,13 +21,19 @@ interface Props {
   onClose: () => void;
 }
 
-/** Asks before releasing a hold or cancelling a booking; a refusal is shown in the dialog. */
+/**
+ * Asks before releasing a hold or cancelling a booking, stating the workshop's cancellation
+ * rule and what cancelling now would refund (the API's figure); a refusal is shown here.
+ */
 export function CancelBookingDialog({ booking, open, onClose }: Props) {
   const cancel = useCancelBooking();
   const titleId = useId();
   const textId = useId();
+  const policyId = useId();
   const held = booking.state === 'held';
   const when = formatLocalDateTime(booking.startUtc, booking.timeZone);
+  const policy = booking.cancellationPolicy;
+  const paymentPageOpen = held && openPayment(booking.payments) !== null;
 
   const close = () => {
     if (cancel.isPending) return;
@@ -33,7 +42,12 @@ export function CancelBookingDialog({ booking, open, onClose }: Props) {
   };
 
   return (
-    <Dialog open={open} onClose={close} aria-labelledby={titleId} aria-describedby={textId}>
+    <Dialog
+      open={open}
+      onClose={close}
+      aria-labelledby={titleId}
+      aria-describedby={`${textId} ${policyId}`}
+    >
       <DialogTitle id={titleId}>
         {held ? 'Release this time?' : `Cancel booking ${booking.reference}?`}
       </DialogTitle>
@@ -41,8 +55,23 @@ export function CancelBookingDialog({ booking, open, onClose }: Props) {
         <DialogContentText id={textId}>
           {held
             ? `${when} is let go straight away, and others can book it. Your quote stays as it is, so you can book another time.`
-            : `The workshop will no longer expect your vehicle on ${when}. Your quote stays as it is. The workshop will contact you about the deposit.`}
+            : `The workshop will no longer expect your vehicle on ${when}. Your quote stays as it is.`}
         </DialogContentText>
+        <Typography id={policyId} component="div" sx={{ mt: 2, display: 'grid', gap: 1 }}>
+          <span>{cancellationPolicyText(policy)}</span>
+          <strong>
+            {refundNowText({
+              refundIfCancelledNowCents: policy.refundIfCancelledNowCents,
+              heldCents: depositHeldCents(booking),
+            })}
+          </strong>
+          {paymentPageOpen && (
+            <span>
+              If the payment page is still open, close it without paying: a deposit paid after the
+              time is released is refunded in full.
+            </span>
+          )}
+        </Typography>
         {cancel.isError && (
           <Alert severity="error" sx={{ mt: 2 }}>
             {isApiError(cancel.error)

@@ -92,6 +92,8 @@ const setup: WorkshopSetup = {
   holdMinutes: 15,
   leadTimeBufferDays: 1,
   fittingMinutesPerWheel: 15,
+  fullRefundHoursBefore: 48,
+  lateCancelRefundPercent: 0,
   openingHours: [1, 2, 3, 4, 5, 6, 7].map((weekday) => ({
     weekday,
     open: weekday <= 5,
@@ -133,7 +135,45 @@ describe('the calendar form and its request', () => {
       holdMinutes: 15,
       leadTimeBufferDays: 1,
       fittingMinutesPerWheel: 15,
+      fullRefundHoursBefore: 48,
+      lateCancelRefundPercent: 0,
     });
+  });
+
+  it('sends the cancellation rule as whole numbers', () => {
+    const values = {
+      ...calendarValues(setup),
+      fullRefundHoursBefore: ' 72 ',
+      lateCancelRefundPercent: '25',
+    };
+    expect(calendarRequest(values)).toMatchObject({
+      fullRefundHoursBefore: 72,
+      lateCancelRefundPercent: 25,
+    });
+  });
+
+  it('takes the cancellation rule inside the API’s bounds only', async () => {
+    const schema = calendarSchema(['AU-NSW']);
+    const values = calendarValues(setup);
+    const check = (field: string, value: string) =>
+      schema.validateAt(field, { ...values, [field]: value });
+    await expect(check('fullRefundHoursBefore', '0')).resolves.toBe(0);
+    await expect(check('fullRefundHoursBefore', '720')).resolves.toBe(720);
+    await expect(check('fullRefundHoursBefore', '721')).rejects.toThrow(
+      'Use 0 hours to 720 hours.',
+    );
+    await expect(check('fullRefundHoursBefore', '-1')).rejects.toThrow('Use 0 hours to 720 hours.');
+    await expect(check('fullRefundHoursBefore', '1.5')).rejects.toThrow('Enter a whole number.');
+    await expect(check('lateCancelRefundPercent', '100')).resolves.toBe(100);
+    await expect(check('lateCancelRefundPercent', '101')).rejects.toThrow('Use 0 % to 100 %.');
+    await expect(
+      schema.validateAt('lateCancelRefundPercent', {
+        ...values,
+        lateCancelRefundPercent: undefined,
+      }),
+    ).rejects.toThrow(
+      'Enter the share of the deposit a later cancellation gets back (0 for none).',
+    );
   });
 
   it('refuses a slot step the API does not offer and an unknown region', async () => {

@@ -7,11 +7,15 @@ import type {
   WorkshopSetup,
 } from '@/types/api';
 
-/** Mirrors the API's UpdateWorkshopCalendarDto and its calendar rules. */
+/** Mirrors the API's UpdateWorkshopCalendarDto: its calendar and cancellation rules. */
 export const SLOT_STEP_MINUTES = [10, 15, 20, 30, 60] as const;
 export const HOLD_MINUTES = { min: 5, max: 60 } as const;
 export const LEAD_TIME_BUFFER_DAYS = { min: 0, max: 30 } as const;
 export const FITTING_MINUTES_PER_WHEEL = { min: 0, max: 120 } as const;
+/** The cancellation rule: a full refund until this many hours before the start… */
+export const FULL_REFUND_HOURS_BEFORE = { min: 0, max: 720 } as const;
+/** …and this share of the deposit for a later cancellation (0: none). */
+export const LATE_CANCEL_REFUND_PERCENT = { min: 0, max: 100 } as const;
 
 /** ISO weekdays, Monday (1) first, as the API lists them. */
 export const weekdayNames = [
@@ -45,6 +49,8 @@ export interface CalendarFormValues {
   holdMinutes: string;
   leadTimeBufferDays: string;
   fittingMinutesPerWheel: string;
+  fullRefundHoursBefore: string;
+  lateCancelRefundPercent: string;
   openingHours: OpeningHoursValues[];
 }
 
@@ -58,6 +64,8 @@ export const calendarFormFields: readonly string[] = [
   'holdMinutes',
   'leadTimeBufferDays',
   'fittingMinutesPerWheel',
+  'fullRefundHoursBefore',
+  'lateCancelRefundPercent',
   ...weekdayNames.flatMap((_name, index) =>
     HOURS_FIELDS.map((field) => `openingHours[${index}].${field}`),
   ),
@@ -97,6 +105,8 @@ export function calendarValues(setup: WorkshopSetup): CalendarFormValues {
     holdMinutes: String(setup.holdMinutes),
     leadTimeBufferDays: String(setup.leadTimeBufferDays),
     fittingMinutesPerWheel: String(setup.fittingMinutesPerWheel),
+    fullRefundHoursBefore: String(setup.fullRefundHoursBefore),
+    lateCancelRefundPercent: String(setup.lateCancelRefundPercent),
     openingHours: weekdayNames.map((_name, index) => {
       const entry = byWeekday.get(index + 1);
       return entry
@@ -259,6 +269,16 @@ export function calendarSchema(regionCodes: readonly string[]) {
       unit: 'minutes',
       whole: true,
     }).required('Enter the bay time to fit one wheel.'),
+    fullRefundHoursBefore: numberInRange({
+      ...FULL_REFUND_HOURS_BEFORE,
+      unit: 'hours',
+      whole: true,
+    }).required('Enter how many hours before the start a cancellation is refunded in full.'),
+    lateCancelRefundPercent: numberInRange({
+      ...LATE_CANCEL_REFUND_PERCENT,
+      unit: '%',
+      whole: true,
+    }).required('Enter the share of the deposit a later cancellation gets back (0 for none).'),
     openingHours: yup.array(openingHoursSchema).length(7).required(),
   });
 }
@@ -298,6 +318,8 @@ export function calendarRequest(values: CalendarFormValues): UpdateWorkshopCalen
     holdMinutes: Number(values.holdMinutes.trim()),
     leadTimeBufferDays: Number(values.leadTimeBufferDays.trim()),
     fittingMinutesPerWheel: Number(values.fittingMinutesPerWheel.trim()),
+    fullRefundHoursBefore: Number(values.fullRefundHoursBefore.trim()),
+    lateCancelRefundPercent: Number(values.lateCancelRefundPercent.trim()),
     openingHours: values.openingHours.map(openingHoursRequest),
   };
 }

@@ -15,10 +15,13 @@ import { FormSwitchField } from '@/components/ui/form-switch-field';
 import { FormTextField } from '@/components/ui/form-text-field';
 import { FormikForm } from '@/components/ui/formik-form';
 import { SubmitButton } from '@/components/ui/submit-button';
+import { cancellationPolicyText } from '@/lib/cancellation-policy';
 import { applyApiErrorToForm } from '@/lib/form-errors';
 import type { WorkshopSetup } from '@/types/api';
 import { useUpdateWorkshopCalendar } from '../api/update-workshop-calendar';
 import {
+  FULL_REFUND_HOURS_BEFORE,
+  LATE_CANCEL_REFUND_PERCENT,
   SLOT_STEP_MINUTES,
   calendarFieldFor,
   calendarFormFields,
@@ -157,6 +160,27 @@ function DayHoursFields({ index, readOnly }: { index: number; readOnly: boolean 
   );
 }
 
+function wholeNumberIn(text: string, range: { min: number; max: number }): number | null {
+  const trimmed = text.trim();
+  if (!/^\d+$/.test(trimmed)) return null;
+  const value = Number(trimmed);
+  return value >= range.min && value <= range.max ? value : null;
+}
+
+/** The rule as customers will read it in the cancel dialog, while both fields are valid. */
+function PolicyPreview() {
+  const { values } = useFormikContext<CalendarFormValues>();
+  const hours = wholeNumberIn(values.fullRefundHoursBefore, FULL_REFUND_HOURS_BEFORE);
+  const percent = wholeNumberIn(values.lateCancelRefundPercent, LATE_CANCEL_REFUND_PERCENT);
+  if (hours === null || percent === null) return null;
+  return (
+    <Typography variant="body2" sx={{ gridColumn: '1 / -1', mt: 1 }}>
+      Customers read: “
+      {cancellationPolicyText({ fullRefundHoursBefore: hours, lateCancelRefundPercent: percent })}”
+    </Typography>
+  );
+}
+
 function SaveRow({ saved }: { saved: string | null }) {
   const { dirty } = useFormikContext();
   return (
@@ -277,6 +301,29 @@ export function CalendarForm({ setup, readOnly }: Props) {
             helperText={help('Mount, balance and fit, per wheel.')}
             slotProps={unit('minutes')}
           />
+        </Group>
+
+        <Group
+          title="Cancellation and refunds"
+          lead="What a customer gets back of a paid deposit when they cancel. Refunds go back through the payment provider."
+        >
+          <FormTextField
+            name="fullRefundHoursBefore"
+            label="Full refund until"
+            disabled={readOnly}
+            helperText={help(
+              `Hours before the start, ${FULL_REFUND_HOURS_BEFORE.min} to ${FULL_REFUND_HOURS_BEFORE.max}.`,
+            )}
+            slotProps={unit('hours before the start')}
+          />
+          <FormTextField
+            name="lateCancelRefundPercent"
+            label="Later cancellation refunds"
+            disabled={readOnly}
+            helperText={help('Share of the deposit, 0 for no refund.')}
+            slotProps={unit('% of the deposit')}
+          />
+          <PolicyPreview />
         </Group>
 
         <Paper
