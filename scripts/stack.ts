@@ -142,8 +142,9 @@ async function startPayments(
   const secrets = paymentsSecrets();
   const service = startService({
     name: 'payments',
-    command: 'npx',
-    args: ['tsx', join(ROOT, 'fakes', 'payments', 'src', 'server.ts')],
+    // One process (tsx as a loader, not its CLI), so stopping the stack stops the stand-in too.
+    command: 'node',
+    args: ['--import', 'tsx', join(ROOT, 'fakes', 'payments', 'src', 'server.ts')],
     env: {
       PAYMENTS_PORT: String(ports.payments),
       PAYMENTS_HOST: '127.0.0.1',

@@ -294,6 +294,37 @@ describe('bookings: availability, holds, moves and the database guard', () => {
     expect(await activeOverlaps()).toBe(0);
   });
 
+  it('the desk confirms a requested booking and moves it along its work; others may not', async () => {
+    const quote = await saveQuote();
+    const start = allStarts(await availability(quote.versionId))[12];
+    const booking = (
+      await post(customer, '/api/bookings', {
+        quoteVersionId: quote.versionId,
+        start: start.startUtc,
+      }).expect(201)
+    ).body as Booking;
+    // A held booking is not a request yet: the deposit makes it one.
+    const early = await post(desk, `/api/bookings/${booking.id}/advance`, { state: 'confirmed' });
+    expect(early.status).toBe(409);
+    await testApp.db.query(
+      `update booking set state = 'requested', hold_expires_at = null where id = $1`,
+      [booking.id],
+    );
+    await post(customer, `/api/bookings/${booking.id}/advance`, { state: 'confirmed' }).expect(403);
+    await post(tech, `/api/bookings/${booking.id}/advance`, { state: 'confirmed' }).expect(403);
+    const bad = await post(desk, `/api/bookings/${booking.id}/advance`, { state: 'held' });
+    expect(bad.status).toBe(400);
+    expect((bad.body as { fieldErrors: object }).fieldErrors).toHaveProperty('state');
+    for (const state of ['confirmed', 'in-progress', 'completed']) {
+      const answer = await post(desk, `/api/bookings/${booking.id}/advance`, { state });
+      expect(answer.status, JSON.stringify(answer.body)).toBe(200);
+      expect((answer.body as Booking).state).toBe(state);
+    }
+    // A completed job keeps its history; its bays stay as they were recorded.
+    const skipped = await post(desk, `/api/bookings/${booking.id}/advance`, { state: 'confirmed' });
+    expect(skipped.status).toBe(409);
+  });
+
   it('the database refuses an overlapping reservation even past the application (exclusion constraint)', async () => {
     const quote = await saveQuote();
     const start = allStarts(await availability(quote.versionId))[6];

@@ -94,6 +94,8 @@ const INTENDED_ACCESS: Record<string, Principal[]> = {
   'POST /api/bookings/:id/move': ['customer', 'desk', 'manager'],
   'POST /api/bookings/:id/cancel': ['customer', 'desk', 'manager'],
   'POST /api/bookings/:id/move-request': ['customer'],
+  // Issue 7: the desk confirms and moves bookings along their work.
+  'POST /api/bookings/:id/advance': ['desk', 'manager'],
   // Issue 6: deposits. The webhook is public (the provider calls it, proving itself by the
   // signature; every principal here gets 400 for the missing one).
   'POST /api/bookings/:id/deposit-checkout': ['customer', 'desk', 'manager'],

@@ -17,6 +17,7 @@ import type { User } from '../users/entities/user.entity';
 import { BookingsService } from './bookings.service';
 import { AvailabilityResponse, BookingConflictResponse } from './dto/availability.response';
 import {
+  AdvanceBookingDto,
   AvailabilityQueryDto,
   CreateBookingDto,
   MoveBookingDto,
@@ -145,6 +146,23 @@ export class BookingsController {
     @CurrentUser() user: User,
   ): Promise<DepositCheckoutResponse> {
     return this.bookings.depositCheckout(params.id, user);
+  }
+
+  @Roles('desk', 'manager')
+  @Post('bookings/:id/advance')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({
+    summary:
+      'The desk moves a booking on: requested → confirmed, confirmed → in-progress (vehicle in), in-progress → completed',
+  })
+  @ApiOkResponse({ type: BookingResponse })
+  @ApiConflictResponse({ description: 'Not the state this step starts from', type: ErrorResponse })
+  advance(
+    @Param() params: IdParams,
+    @Body() dto: AdvanceBookingDto,
+    @CurrentUser() user: User,
+  ): Promise<BookingResponse> {
+    return this.bookings.advance(params.id, dto, user);
   }
 
   @Roles('customer')

@@ -16,6 +16,7 @@ import { AvailabilityService, type BusyExclusion } from './availability.service'
 import { type BookingState, bookingReference } from './booking-states';
 import { isCalendarDate, startOptionResponse, utcIso, zonedIso } from './booking-times';
 import type {
+  AdvanceBookingDto,
   AvailabilityQueryDto,
   CreateBookingDto,
   MoveBookingDto,
@@ -30,6 +31,13 @@ import type {
 import { Booking } from './entities/booking.entity';
 import { Reservation } from './entities/reservation.entity';
 import { expireLapsedHolds, isOverlapRefusal } from './holds';
+
+/** The state each desk step starts from. */
+const BOOKING_STEPS: Record<AdvanceBookingDto['state'], BookingState> = {
+  confirmed: 'requested',
+  'in-progress': 'confirmed',
+  completed: 'in-progress',
+};
 
 /** Roles that see and manage every booking. */
 const DESK_ROLES = ['desk', 'manager'] as const;
@@ -172,6 +180,25 @@ export class BookingsService {
       }
       booking.moveRequestNote = dto.note.trim();
       booking.moveRequestedAt = new Date();
+    });
+    return this.get(id, user);
+  }
+
+  /**
+   * The desk moves a booking along its work: requested → confirmed (the workshop takes it on),
+   * confirmed → in-progress (the vehicle is in and work has started), in-progress → completed.
+   */
+  async advance(id: string, dto: AdvanceBookingDto, user: User): Promise<BookingResponse> {
+    await this.em.transactional(async (em) => {
+      const booking = await this.lockVisible(em, id, user);
+      const from = BOOKING_STEPS[dto.state];
+      if (booking.state !== from) {
+        throw new ConflictException(
+          `Booking ${bookingReference(booking.number)} is ${booking.state}: only a ${from} booking can become ${dto.state}.`,
+        );
+      }
+      booking.state = dto.state;
+      booking.stateChangedAt = new Date();
     });
     return this.get(id, user);
   }

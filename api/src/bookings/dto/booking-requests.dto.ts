@@ -2,6 +2,7 @@ import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
 import {
   IsDateString,
+  IsIn,
   IsInt,
   IsOptional,
   IsString,
@@ -60,4 +61,13 @@ export class MoveRequestDto {
   @MaxLength(500, { message: 'must be 500 characters or fewer' })
   @ApiProperty({ example: 'Could it be the Thursday after?', maxLength: 500 })
   note!: string;
+}
+
+/** The desk's steps of a booking's work, in order. */
+export const DESK_STEPS = ['confirmed', 'in-progress', 'completed'] as const;
+
+export class AdvanceBookingDto {
+  @IsIn(DESK_STEPS, { message: `must be one of ${DESK_STEPS.join(', ')}` })
+  @ApiProperty({ enum: DESK_STEPS, enumName: 'DeskBookingStep' })
+  state!: (typeof DESK_STEPS)[number];
 }

@@ -21,7 +21,12 @@ export interface BookingPlanSnapshot {
  */
 @Entity()
 export class Booking extends BaseEntity<
-  'holdExpiresAt' | 'cancelledAt' | 'moveRequestNote' | 'moveRequestedAt' | 'stateChangedAt'
+  | 'holdExpiresAt'
+  | 'cancelledAt'
+  | 'moveRequestNote'
+  | 'moveRequestedAt'
+  | 'stateChangedAt'
+  | 'calendarSequence'
 > {
   /** Shown as B-000042; from a sequence. */
   @Property({ type: 'integer', autoincrement: true, unique: true })
@@ -67,6 +72,13 @@ export class Booking extends BaseEntity<
 
   @Property({ type: 'datetime', columnType: 'timestamptz', nullable: true })
   moveRequestedAt: Date | null = null;
+
+  /**
+   * The SEQUENCE of the booking's calendar event (RFC 5545 §3.8.7.4): 0 when first sent, raised
+   * by one on every move and on cancellation, so the customer's calendar takes the latest.
+   */
+  @Property({ type: 'integer', default: 0 })
+  calendarSequence = 0;
 
   @OneToMany(() => Reservation, (reservation) => reservation.booking, {
     orderBy: { startsAt: 'asc' },
