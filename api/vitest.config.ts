@@ -22,6 +22,9 @@ export default defineConfig({
       // PAYMENTS_API_URL is set to its address by test/support/test-app.ts.
       PAYMENTS_SECRET_KEY: 'sk_test_liftwright_api_tests',
       PAYMENTS_WEBHOOK_SECRET: 'whsec_liftwright_api_tests',
+      // The outbox retries after 1 s, 2 s, 4 s … so a spec's mail server may be down a while.
+      OUTBOX_RETRY_DELAY_SECONDS: '1',
+      OUTBOX_POLL_SECONDS: '1',
     },
     projects: [
       // Unit specs beside the code: no database, run in parallel.

@@ -27,6 +27,7 @@ import { PgPoolModule } from './database/pg-pool.module';
 import { FitReportsModule } from './fit-reports/fit-reports.module';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
+import { NotificationsModule } from './notifications/notifications.module';
 import { createOrmConfig } from './mikro-orm.config';
 import { PaymentsModule } from './payments/payments.module';
 import { PAYMENTS_WEBHOOK_PATH } from './payments/payments-webhook.path';
@@ -118,6 +119,7 @@ function insideNest(handler: RequestHandler): RequestHandler {
     StaffModule,
     HealthModule,
     MailModule,
+    NotificationsModule,
     VehiclesModule,
     CustomerVehiclesModule,
     CatalogueModule,

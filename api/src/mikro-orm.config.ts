@@ -12,6 +12,7 @@ import { Product } from './catalogue/entities/product.entity';
 import { validateDatabaseEnvironment } from './config/environment';
 import { CustomerVehicle } from './customer-vehicles/entities/customer-vehicle.entity';
 import { MIGRATIONS } from './database/migrations-list';
+import { OUTBOX_SCHEMA } from './notifications/outbox-schema';
 import { Payment } from './payments/entities/payment.entity';
 import { ProcessedWebhookEvent } from './payments/entities/processed-webhook-event.entity';
 import { Refund } from './payments/entities/refund.entity';
@@ -68,6 +69,9 @@ export function createOrmConfig(databaseUrl: string, { writeSnapshot = true } = 
     ensureDatabase: false,
     debug: false,
     extensions: [Migrator, SeedManager],
+    // pg-boss (the e-mail outbox) keeps its own tables in its own schema and migrates them
+    // itself: they are not ours to diff, create or drop.
+    schemaGenerator: { ignoreSchema: [OUTBOX_SCHEMA] },
     migrations: {
       tableName: 'mikro_orm_migrations',
       // Compiled migrations run from dist; new ones are written as TypeScript into src.

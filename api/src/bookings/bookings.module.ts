@@ -1,5 +1,6 @@
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { Module } from '@nestjs/common';
+import { NotificationsModule } from '../notifications/notifications.module';
 import { PaymentsModule } from '../payments/payments.module';
 import { QuotesModule } from '../quotes/quotes.module';
 import { WorkshopModule } from '../workshop/workshop.module';
@@ -16,6 +17,7 @@ import { HoldSweeperService } from './hold-sweeper.service';
     QuotesModule,
     WorkshopModule,
     PaymentsModule,
+    NotificationsModule,
   ],
   controllers: [BookingsController],
   providers: [BookingsService, AvailabilityService, HoldSweeperService],

@@ -4,6 +4,12 @@ import { FieldErrorsException } from '../common/errors/field-errors.exception';
 import { TimeTakenException } from '../common/errors/time-taken.exception';
 import { vehicleName } from '../fit-reports/fit-reports.service';
 import { paymentSummary } from '../payments/payment-summary';
+import {
+  bookingCancelledMessage,
+  bookingMovedMessage,
+  refundIssuedMessage,
+} from '../notifications/messages/booking-messages';
+import { NotificationsService } from '../notifications/notifications.service';
 import { PaymentsService } from '../payments/payments.service';
 import { QuoteVersion } from '../quotes/entities/quote-version.entity';
 import { quoteReference } from '../quotes/quote-reference';
@@ -76,6 +82,7 @@ export class BookingsService {
     private readonly availability: AvailabilityService,
     private readonly workshop: WorkshopService,
     private readonly payments: PaymentsService,
+    private readonly notifications: NotificationsService,
   ) {}
 
   async findAvailability(query: AvailabilityQueryDto, user: User): Promise<AvailabilityResponse> {
@@ -139,14 +146,58 @@ export class BookingsService {
       }
       // The refund the policy allows is made first: if the provider fails, nothing is cancelled.
       const now = new Date();
-      await this.payments.refundOnCancellation(em, booking, await loadWorkshop(em), now);
+      const workshop = await loadWorkshop(em);
+      const refunds = await this.payments.refundOnCancellation(em, booking, workshop, now);
+      const wasState = booking.state;
       booking.state = 'cancelled';
       booking.stateChangedAt = now;
       booking.cancelledAt = booking.stateChangedAt;
       booking.holdExpiresAt = null;
       for (const reservation of booking.reservations) reservation.active = false;
+      await this.queueCancelled(em, booking, wasState, refunds, now);
     });
     return this.get(id, user);
+  }
+
+  /**
+   * The customer is told of a cancellation (not of a hold let go: they are choosing a time),
+   * with a METHOD:CANCEL event when they had a confirmed one, and of each refund.
+   */
+  private async queueCancelled(
+    em: EntityManager,
+    booking: Booking,
+    wasState: BookingState,
+    refunds: Awaited<ReturnType<PaymentsService['refundOnCancellation']>>,
+    now: Date,
+  ): Promise<void> {
+    if (wasState === 'held' && refunds.length === 0) return;
+    booking.calendarSequence += 1;
+    const input = await this.notifications.bookingInput(em, booking, now);
+    await this.notifications.queue(em, {
+      causeKey: `booking-cancelled:${booking.id}`,
+      to: booking.customer.email,
+      content: bookingCancelledMessage({
+        ...input,
+        withCalendar: wasState === 'confirmed' || wasState === 'in-progress',
+      }),
+    });
+    for (const refund of refunds) {
+      await this.notifications.queue(em, {
+        causeKey: `refund-issued:${refund.id}`,
+        to: booking.customer.email,
+        content: refundIssuedMessage({
+          customer: input.customer,
+          workshop: input.workshop,
+          timeZone: input.timeZone,
+          bookingReference: input.bookingReference,
+          currency: refund.payment.currency,
+          refundCents: refund.amountCents,
+          paidCents: refund.payment.amountCents,
+          reason: refund.reason,
+          refundedAt: now,
+        }),
+      });
+    }
   }
 
   /**
@@ -199,6 +250,10 @@ export class BookingsService {
       }
       booking.state = dto.state;
       booking.stateChangedAt = new Date();
+      // The customer hears of it (with the calendar entry) in the same transaction.
+      if (dto.state === 'confirmed') {
+        await this.notifications.queueBookingConfirmed(em, booking, booking.stateChangedAt);
+      }
     });
     return this.get(id, user);
   }
@@ -278,6 +333,7 @@ export class BookingsService {
     await expireLapsedHolds(em, now);
     const booking = await this.lockVisible(em, id, user);
     this.assertMovable(booking, user);
+    const previousStartsAt = booking.startsAt;
     // Release first, in this transaction: the booking's own time does not stand in its way, and
     // if the new time is refused everything rolls back to where it was.
     for (const reservation of booking.reservations) em.remove(reservation);
@@ -303,6 +359,19 @@ export class BookingsService {
       );
     }
     await this.reserve(em, booking, option);
+    if (booking.state !== 'held') {
+      // A held time is the customer's own choice; a requested or confirmed one is told.
+      booking.calendarSequence += 1;
+      await this.notifications.queue(em, {
+        causeKey: `booking-moved:${booking.id}:${booking.calendarSequence}`,
+        to: booking.customer.email,
+        content: bookingMovedMessage({
+          ...(await this.notifications.bookingInput(em, booking, now)),
+          previousStartsAt,
+          withCalendar: booking.state === 'confirmed',
+        }),
+      });
+    }
     await em.flush();
     return booking.id;
   }

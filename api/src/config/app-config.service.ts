@@ -65,6 +65,22 @@ export class AppConfigService {
     return this.config.get('SESSION_MAX_HOURS', { infer: true }) * 3_600_000;
   }
 
+  get outboxWorker(): boolean {
+    return this.config.get('OUTBOX_WORKER', { infer: true });
+  }
+
+  get outboxRetryLimit(): number {
+    return this.config.get('OUTBOX_RETRY_LIMIT', { infer: true });
+  }
+
+  get outboxRetryDelaySeconds(): number {
+    return this.config.get('OUTBOX_RETRY_DELAY_SECONDS', { infer: true });
+  }
+
+  get outboxPollSeconds(): number {
+    return this.config.get('OUTBOX_POLL_SECONDS', { infer: true });
+  }
+
   get trustProxy(): boolean {
     return this.config.get('TRUST_PROXY', { infer: true });
   }

@@ -185,6 +185,35 @@ export class Environment extends DatabaseEnvironment {
   TRUST_PROXY = false;
 
   /**
+   * Whether this process delivers the e-mail outbox (the API: yes). Set to false for a process
+   * that only queues messages; they wait in the outbox for a process that delivers.
+   */
+  @Transform(toBoolean)
+  @IsBoolean({ message: '$property must be true or false' })
+  OUTBOX_WORKER = true;
+
+  /** How many more tries a message gets after its first failed delivery. */
+  @Transform(toWholeNumber)
+  @IsInt({ message: '$property must be a whole number between 0 and 50' })
+  @Min(0, { message: '$property must be a whole number between 0 and 50' })
+  @Max(50, { message: '$property must be a whole number between 0 and 50' })
+  OUTBOX_RETRY_LIMIT = 12;
+
+  /** The first wait before a retry; each later wait doubles (with some random spread). */
+  @Transform(toWholeNumber)
+  @IsInt({ message: '$property must be a whole number of seconds between 1 and 3600' })
+  @Min(1, { message: '$property must be a whole number of seconds between 1 and 3600' })
+  @Max(3600, { message: '$property must be a whole number of seconds between 1 and 3600' })
+  OUTBOX_RETRY_DELAY_SECONDS = 30;
+
+  /** How often the worker looks for messages to send. */
+  @Transform(toWholeNumber)
+  @IsInt({ message: '$property must be a whole number of seconds between 1 and 60' })
+  @Min(1, { message: '$property must be a whole number of seconds between 1 and 60' })
+  @Max(60, { message: '$property must be a whole number of seconds between 1 and 60' })
+  OUTBOX_POLL_SECONDS = 2;
+
+  /**
    * Customer photos (originals and thumbnails, random names). Keep it outside the web root:
    * the files are served only through the authorised upload routes. Stored as an absolute path.
    */
@@ -257,6 +286,10 @@ const ENVIRONMENT_KEYS = [
   'SESSION_MAX_HOURS',
   'HOLD_SWEEP_SECONDS',
   'TRUST_PROXY',
+  'OUTBOX_WORKER',
+  'OUTBOX_RETRY_LIMIT',
+  'OUTBOX_RETRY_DELAY_SECONDS',
+  'OUTBOX_POLL_SECONDS',
   'UPLOAD_DIR',
   'PAYMENTS_SECRET_KEY',
   'PAYMENTS_WEBHOOK_SECRET',

@@ -5,6 +5,7 @@ import { Migration20261202014939 } from './migrations/Migration20261202014939';
 import { Migration20261202025114 } from './migrations/Migration20261202025114';
 import { Migration20261202063421 } from './migrations/Migration20261202063421';
 import { Migration20261202070312 } from './migrations/Migration20261202070312';
+import { Migration20261202072618 } from './migrations/Migration20261202072618';
 
 /**
  * Every migration, oldest first. Listed explicitly (rather than found by a file glob) so the same
@@ -18,4 +19,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261202025114', class: Migration20261202025114 },
   { name: 'Migration20261202063421', class: Migration20261202063421 },
   { name: 'Migration20261202070312', class: Migration20261202070312 },
+  { name: 'Migration20261202072618', class: Migration20261202072618 },
 ];

@@ -1,7 +1,7 @@
 import { Injectable, Logger, type OnApplicationShutdown } from '@nestjs/common';
 import { createTransport, type Transporter } from 'nodemailer';
 import { AppConfigService } from '../config/app-config.service';
-import type { MailContent } from './templates/mail-content';
+import type { MailContent, OutgoingMail } from './templates/mail-content';
 
 /** Sends e-mail through the SMTP server named by SMTP_URL. */
 @Injectable()
@@ -20,6 +20,28 @@ export class MailService implements OnApplicationShutdown {
       subject: content.subject,
       text: content.text,
       html: content.html,
+    });
+  }
+
+  /**
+   * Sends one message of the outbox with the Message-ID it was given when it was queued, so a
+   * second try of the same job is the same message (mail clients keep one of them). Throws
+   * when the SMTP server does not take it: the queue tries again later.
+   */
+  async deliver(message: OutgoingMail): Promise<void> {
+    await this.transport.sendMail({
+      from: this.config.mailFrom,
+      to: message.to,
+      ...(message.replyTo ? { replyTo: message.replyTo } : {}),
+      messageId: message.messageId,
+      subject: message.subject,
+      text: message.text,
+      html: message.html,
+      attachments: message.attachments.map((attachment) => ({
+        filename: attachment.filename,
+        contentType: attachment.contentType,
+        content: attachment.content,
+      })),
     });
   }
 

@@ -5,10 +5,14 @@ import { bookingReference } from '../bookings/booking-states';
 import { Booking } from '../bookings/entities/booking.entity';
 import { AppConfigService } from '../config/app-config.service';
 import { vehicleName } from '../fit-reports/fit-reports.service';
-import { MailService } from '../mail/mail.service';
 import { quoteReference } from '../quotes/quote-reference';
 import { loadWorkshop } from '../workshop/workshop.service';
-import { depositReceiptMail, type DepositReceiptMailInput } from './deposit-receipt.mail';
+import { bookingRequestedMessage } from '../notifications/messages/booking-messages';
+import {
+  depositReceiptMail,
+  type DepositReceiptMailInput,
+} from '../notifications/messages/deposit-receipt.message';
+import { NotificationsService } from '../notifications/notifications.service';
 import { Payment } from './entities/payment.entity';
 import { Refund } from './entities/refund.entity';
 import { paymentSummary } from './payment-summary';
@@ -23,13 +27,6 @@ const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 export interface WebhookOutcome {
   received: true;
   duplicate: boolean;
-}
-
-type Receipt = { to: string; input: DepositReceiptMailInput };
-
-/** Work to do once the event's transaction has committed (e-mail). */
-interface AfterCommit {
-  receipts: Receipt[];
 }
 
 function idOf(value: string | { id: string } | null | undefined): string | null {
@@ -53,7 +50,7 @@ export class PaymentWebhooksService {
     @Inject(PAYMENTS_CLIENT) private readonly client: PaymentsClient,
     private readonly config: AppConfigService,
     private readonly payments: PaymentsService,
-    private readonly mail: MailService,
+    private readonly notifications: NotificationsService,
   ) {}
 
   /** The event, if the signature matches the exact bytes received and is recent (300 s). */
@@ -83,7 +80,6 @@ export class PaymentWebhooksService {
   }
 
   async handle(event: Stripe.Event): Promise<WebhookOutcome> {
-    const after: AfterCommit = { receipts: [] };
     const fresh = await this.em.fork().transactional(async (em) => {
       const recorded = await em.execute<{ event_id: string }[]>(
         `insert into processed_webhook_event (event_id, type, received_at) values (?, ?, ?)
@@ -92,16 +88,13 @@ export class PaymentWebhooksService {
       );
       // Another delivery of this event got there first (it waits here until that one commits).
       if (recorded.length === 0) return false;
-      await this.apply(em, event, after);
+      await this.apply(em, event);
       return true;
     });
-    for (const receipt of after.receipts) {
-      this.mail.sendInBackground(receipt.to, depositReceiptMail(receipt.input));
-    }
     return { received: true, duplicate: !fresh };
   }
 
-  private async apply(em: EntityManager, event: Stripe.Event, after: AfterCommit): Promise<void> {
+  private async apply(em: EntityManager, event: Stripe.Event): Promise<void> {
     const paidAt = new Date(event.created * 1000);
     switch (event.type) {
       case 'checkout.session.completed':
@@ -109,7 +102,7 @@ export class PaymentWebhooksService {
         const session = event.data.object;
         if (session.payment_status !== 'paid') return;
         const found = await this.paymentBy(em, { checkoutSessionId: session.id });
-        if (found) await this.recordPaid(em, found, idOf(session.payment_intent), paidAt, after);
+        if (found) await this.recordPaid(em, found, idOf(session.payment_intent), paidAt);
         return;
       }
       case 'payment_intent.succeeded': {
@@ -120,7 +113,7 @@ export class PaymentWebhooksService {
           (paymentId && UUID.test(paymentId)
             ? await this.paymentBy(em, { id: paymentId, paymentIntentId: null })
             : null);
-        if (found) await this.recordPaid(em, found, intent.id, paidAt, after);
+        if (found) await this.recordPaid(em, found, intent.id, paidAt);
         return;
       }
       case 'checkout.session.expired':
@@ -189,7 +182,6 @@ export class PaymentWebhooksService {
     payment: Payment,
     paymentIntentId: string | null,
     paidAt: Date,
-    after: AfterCommit,
   ): Promise<void> {
     if (payment.status === 'paid') {
       if (!payment.paymentIntentId && paymentIntentId) payment.paymentIntentId = paymentIntentId;
@@ -204,7 +196,8 @@ export class PaymentWebhooksService {
       .getItems()
       .some((other) => other !== payment && other.kind === 'deposit' && other.status === 'paid');
     let refundedInFullCents: number | undefined;
-    if (booking.state === 'held' && !alreadyPaid) {
+    const requested = booking.state === 'held' && !alreadyPaid;
+    if (requested) {
       booking.state = 'requested';
       booking.stateChangedAt = new Date();
       booking.holdExpiresAt = null;
@@ -217,10 +210,23 @@ export class PaymentWebhooksService {
       refundedInFullCents = refund?.amountCents;
     }
     await em.flush();
-    after.receipts.push({
+    // In this transaction: the messages exist exactly when the payment is recorded.
+    await this.notifications.queue(em, {
+      causeKey: `deposit-receipt:${payment.id}`,
       to: booking.customer.email,
-      input: await this.receiptInput(em, booking, payment, refundedInFullCents),
+      content: depositReceiptMail(
+        await this.receiptInput(em, booking, payment, refundedInFullCents),
+      ),
     });
+    if (requested) {
+      await this.notifications.queue(em, {
+        causeKey: `booking-requested:${booking.id}`,
+        to: booking.customer.email,
+        content: bookingRequestedMessage(
+          await this.notifications.bookingInput(em, booking, new Date()),
+        ),
+      });
+    }
   }
 
   /** Records each refund of the charge not yet recorded, and the charge's refunded total. */

@@ -1,6 +1,6 @@
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { Module } from '@nestjs/common';
-import { MailModule } from '../mail/mail.module';
+import { NotificationsModule } from '../notifications/notifications.module';
 import { Payment } from './entities/payment.entity';
 import { ProcessedWebhookEvent } from './entities/processed-webhook-event.entity';
 import { Refund } from './entities/refund.entity';
@@ -15,7 +15,10 @@ import { PaymentsService } from './payments.service';
  * booking service, and the provider's webhook.
  */
 @Module({
-  imports: [MikroOrmModule.forFeature([Payment, Refund, ProcessedWebhookEvent]), MailModule],
+  imports: [
+    MikroOrmModule.forFeature([Payment, Refund, ProcessedWebhookEvent]),
+    NotificationsModule,
+  ],
   controllers: [PaymentsController],
   providers: [paymentsClientProvider, PaymentsService, PaymentWebhooksService],
   exports: [PAYMENTS_CLIENT, PaymentsService],

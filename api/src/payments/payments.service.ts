@@ -117,13 +117,15 @@ export class PaymentsService {
    * the provider, before the caller marks the booking cancelled; each refund is recorded. Open
    * checkout sessions are closed at the provider so they can no longer be paid (if one is paid
    * anyway, its webhook refunds it in full). A provider failure is a 502: nothing is cancelled.
+   * Returns the refunds made.
    */
   async refundOnCancellation(
     em: EntityManager,
     booking: Booking,
     policy: CancellationPolicy,
     now: Date,
-  ): Promise<void> {
+  ): Promise<Refund[]> {
+    const made: Refund[] = [];
     const payments = booking.payments.getItems();
     for (const payment of payments.filter((candidate) => candidate.status === 'open')) {
       await this.closeSession(payment, now);
@@ -145,8 +147,9 @@ export class PaymentsService {
         refundable.length === 1
           ? `refund-${booking.id}`
           : `refund-${booking.id}-${payment.attempt}`;
-      await this.refund(em, booking, payment, outcome.refundCents, reason, key);
+      made.push(await this.refund(em, booking, payment, outcome.refundCents, reason, key));
     }
+    return made;
   }
 
   /**

@@ -1,5 +1,6 @@
 import { MikroOrmModule } from '@mikro-orm/nestjs';
 import { Module } from '@nestjs/common';
+import { NotificationsModule } from '../notifications/notifications.module';
 import { Product } from '../catalogue/entities/product.entity';
 import { CustomerVehicle } from '../customer-vehicles/entities/customer-vehicle.entity';
 import { FitReportsModule } from '../fit-reports/fit-reports.module';
@@ -30,6 +31,7 @@ import { QuotesService } from './quotes.service';
     ]),
     FitReportsModule,
     WorkshopModule,
+    NotificationsModule,
   ],
   controllers: [QuotesController, PlannerController],
   providers: [

@@ -2,13 +2,16 @@ import { type FilterQuery, LockMode, raw } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/postgresql';
 import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { FieldErrorsException } from '../common/errors/field-errors.exception';
+import { AppConfigService } from '../config/app-config.service';
 import { FitReportResponse } from '../fit-reports/dto/fit-report.response';
 import { vehicleName } from '../fit-reports/fit-reports.service';
+import { quoteSavedMessage } from '../notifications/messages/booking-messages';
+import { NotificationsService } from '../notifications/notifications.service';
 import { Upload } from '../uploads/entities/upload.entity';
 import { User } from '../users/entities/user.entity';
 import type { Role } from '../users/user-role';
 import { escapeLike } from '../vehicles/vehicles.service';
-import { WorkshopService } from '../workshop/workshop.service';
+import { WorkshopService, loadWorkshop } from '../workshop/workshop.service';
 import { localDateOf } from '../workshop/workshop-time';
 import type { CreateQuoteDto } from './dto/create-quote.dto';
 import { PackagePriceResponse } from './dto/package-price.response';
@@ -74,6 +77,8 @@ export class QuotesService {
     private readonly em: EntityManager,
     private readonly packages: QuotePackagesService,
     private readonly workshop: WorkshopService,
+    private readonly notifications: NotificationsService,
+    private readonly config: AppConfigService,
   ) {}
 
   async preview(dto: QuotePackageDto, user: User | null): Promise<QuotePreviewResponse> {
@@ -196,6 +201,26 @@ export class QuotesService {
       }
       em.persist([quote, version, ...lines]);
       await em.flush();
+      if (savedByCustomer) {
+        // A desk's draft is the desk's until it is sent; the customer's own quote is told now.
+        const workshop = await loadWorkshop(em);
+        await this.notifications.queue(em, {
+          causeKey: `quote-saved:${version.id}`,
+          to: customer.email,
+          content: quoteSavedMessage({
+            customer: { name: customer.name, email: customer.email },
+            workshop,
+            timeZone: workshop.timeZone,
+            quoteReference: `${quoteReference(quote.number)} v${version.number}`,
+            vehicleName: vehicleName(priced.vehicle),
+            currency: workshop.currency,
+            totalCents: version.totalCents,
+            depositCents: version.depositCents,
+            validUntilDate: version.validUntilDate,
+            quoteUrl: `${this.config.publicUrl}/account/quotes`,
+          }),
+        });
+      }
       return quote.id;
     });
     return this.get(quoteId, user);

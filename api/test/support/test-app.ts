@@ -19,6 +19,12 @@ export interface TestApp {
   payments: PaymentsStandIn;
   /** Direct database access, to look at or age rows the API wrote. */
   db: Pool;
+  /**
+   * Waits until the e-mail outbox has nothing left to send (no job created, waiting for a retry
+   * or being sent), up to `timeoutMs`: after it, every message queued so far has been delivered
+   * or given up on, so counting the mailbox is final.
+   */
+  outboxIdle(timeoutMs?: number): Promise<void>;
   close(): Promise<void>;
 }
 
@@ -50,6 +56,19 @@ export async function startTestApp(): Promise<TestApp> {
     mailbox,
     payments,
     db,
+    async outboxIdle(timeoutMs = 15_000) {
+      const deadline = Date.now() + timeoutMs;
+      for (;;) {
+        const { rows } = await db.query<{ count: string }>(
+          `select count(*) from pgboss.job where state in ('created', 'retry', 'active')`,
+        );
+        if (Number(rows[0].count) === 0) return;
+        if (Date.now() > deadline) {
+          throw new Error(`The outbox still had ${rows[0].count} message(s) after ${timeoutMs} ms`);
+        }
+        await new Promise((resolve) => setTimeout(resolve, 50));
+      }
+    },
     async close() {
       await payments.close();
       await app.close();

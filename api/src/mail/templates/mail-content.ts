@@ -4,3 +4,21 @@ export interface MailContent {
   text: string;
   html: string;
 }
+
+/** A file sent with a message (an iCalendar event, a PDF), as text or bytes. */
+export interface MailAttachment {
+  filename: string;
+  /** The full MIME type, with its parameters (e.g. `text/calendar; charset=utf-8; method=REQUEST`). */
+  contentType: string;
+  /** Text content (an iCalendar object). */
+  content: string;
+}
+
+/** A customer message as the outbox keeps it: the content, its attachments and its envelope. */
+export interface OutgoingMail extends MailContent {
+  to: string;
+  replyTo?: string;
+  /** `<msg-<job id>@<workshop mail domain>>`: the same on every try of one job. */
+  messageId: string;
+  attachments: MailAttachment[];
+}

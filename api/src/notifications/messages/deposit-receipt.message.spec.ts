@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { DEMO_WORKSHOP_CARD } from '../database/seeders/demo-workshop.seeder';
-import { depositReceiptMail, workshopDateTime } from './deposit-receipt.mail';
+import { DEMO_WORKSHOP_CARD } from '../../database/seeders/demo-workshop.seeder';
+import { depositReceiptMail, workshopDateTime } from './deposit-receipt.message';
 
 const INPUT = {
   customerName: 'Robin <Yarrow> & Co',

@@ -1,7 +1,7 @@
 import escapeHtml from 'escape-html';
-import { DateTime } from 'luxon';
-import type { MailContent } from '../mail/templates/mail-content';
-import { formatCents } from '../pricing/cents';
+import { type CustomerMessage, amount, workshopDateTime } from './customer-message';
+
+export { workshopDateTime };
 
 export interface DepositReceiptMailInput {
   customerName: string;
@@ -26,23 +26,12 @@ export interface DepositReceiptMailInput {
   refundedInFullCents?: number;
 }
 
-/** "Thursday 3 December 2026, 7:30 am AEDT" in the workshop's zone. */
-export function workshopDateTime(instant: Date, timeZone: string): string {
-  return DateTime.fromJSDate(instant, { zone: timeZone })
-    .setLocale('en-AU')
-    .toFormat('cccc d LLLL yyyy, h:mm a ZZZZ');
-}
-
-function amount(cents: number, currency: string): string {
-  return `${formatCents(cents)} ${currency.toUpperCase()}`;
-}
-
 /**
  * The receipt for a deposit, as plain text and HTML: the workshop's card, the booking, when it
  * starts (workshop time), what was paid and what is left to pay. References only, never internal
  * ids.
  */
-export function depositReceiptMail(input: DepositReceiptMailInput): MailContent {
+export function depositReceiptMail(input: DepositReceiptMailInput): CustomerMessage {
   const refunded = input.refundedInFullCents !== undefined;
   const subject = refunded
     ? `Your payment for booking ${input.bookingReference} has been refunded`
@@ -107,5 +96,5 @@ export function depositReceiptMail(input: DepositReceiptMailInput): MailContent 
     <p>${card.map((line) => escapeHtml(line)).join('<br>')}</p>
   </body>
 </html>`;
-  return { subject, text, html };
+  return { subject, text, html, attachments: [] };
 }
