@@ -144,6 +144,12 @@ export function createAppRouter(queryClient: QueryClient) {
                 },
               ],
             },
+            { path: paths.desk.board.path, lazy: lazy(() => import('./routes/desk/board')) },
+            {
+              path: paths.desk.bookings.path,
+              lazy: lazy(() => import('./routes/desk/bookings')),
+            },
+            { path: paths.desk.booking.path, lazy: lazy(() => import('./routes/desk/booking')) },
             { path: paths.desk.quotes.path, lazy: lazy(() => import('./routes/desk/quotes')) },
             { path: paths.desk.quote.path, lazy: lazy(() => import('./routes/desk/quote')) },
             {

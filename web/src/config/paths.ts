@@ -75,6 +75,18 @@ export const paths = {
       path: '/desk/quotes/:quoteId',
       getHref: (quoteId: string) => `/desk/quotes/${encodeURIComponent(quoteId)}`,
     },
+    /** The day board: bays as columns, one day (or a week) of working time. */
+    board: {
+      path: '/desk/board',
+      getHref: (date?: string | null, view?: 'day' | 'week' | null) =>
+        withQuery('/desk/board', { date, view: view === 'week' ? 'week' : null }),
+    },
+    /** Every booking as a table, with the requests waiting for confirmation. */
+    bookings: { path: '/desk/bookings', getHref: () => '/desk/bookings' },
+    booking: {
+      path: '/desk/bookings/:bookingId',
+      getHref: (bookingId: string) => `/desk/bookings/${encodeURIComponent(bookingId)}`,
+    },
     /** The workshop's hours, bays, closures and holidays, read-only for the front desk. */
     workshop: { path: '/desk/workshop', getHref: () => '/desk/workshop' },
   },

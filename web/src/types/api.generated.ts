@@ -898,6 +898,23 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  '/api/bookings/{id}/advance': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** The desk moves a booking on: requested → confirmed, confirmed → in-progress (vehicle in), in-progress → completed */
+    post: operations['BookingsController_advance'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   '/api/bookings/{id}/move-request': {
     parameters: {
       query?: never;
@@ -2852,6 +2869,11 @@ export interface components {
        */
       expiresAt: string;
       booking: components['schemas']['BookingResponse'];
+    };
+    /** @enum {string} */
+    DeskBookingStep: 'confirmed' | 'in-progress' | 'completed';
+    AdvanceBookingDto: {
+      state: components['schemas']['DeskBookingStep'];
     };
     MoveRequestDto: {
       /** @example Could it be the Thursday after? */
@@ -6130,6 +6152,58 @@ export interface operations {
       };
       /** @description The payment provider cannot be reached: nothing changed */
       502: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_advance: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['AdvanceBookingDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not the state this step starts from */
+      409: {
         headers: {
           [name: string]: unknown;
         };

@@ -187,6 +187,7 @@ export type BookingConflict = Schemas['BookingConflictResponse'];
 export type CreateBookingRequest = Schemas['CreateBookingDto'];
 export type MoveBookingRequest = Schemas['MoveBookingDto'];
 export type AskToMoveRequest = Schemas['MoveRequestDto'];
+export type AdvanceBookingRequest = Schemas['AdvanceBookingDto'];
 
 // ---- Deposits and refunds ------------------------------------------------------------------
 /** One payment of a booking (a deposit or a top-up), as the provider reported it. */

@@ -1,4 +1,6 @@
 import BadgeOutlined from '@mui/icons-material/BadgeOutlined';
+import CalendarViewWeekOutlined from '@mui/icons-material/CalendarViewWeekOutlined';
+import ListAltOutlined from '@mui/icons-material/ListAltOutlined';
 import DirectionsCarOutlined from '@mui/icons-material/DirectionsCarOutlined';
 import EventAvailableOutlined from '@mui/icons-material/EventAvailableOutlined';
 import EventNoteOutlined from '@mui/icons-material/EventNoteOutlined';
@@ -43,6 +45,8 @@ export function navItemsForRole(role: Role): NavItem[] {
     );
   }
   const deskWork: NavItem[] = [
+    { label: 'Day board', to: paths.desk.board.getHref(), icon: <CalendarViewWeekOutlined /> },
+    { label: 'Bookings', to: paths.desk.bookings.getHref(), icon: <ListAltOutlined /> },
     { label: 'Walk-in quote', to: paths.desk.walkIn.getHref(), icon: <PersonAddAltOutlined /> },
     { label: 'Quotes', to: paths.desk.quotes.getHref(), icon: <RequestQuoteOutlined /> },
   ];

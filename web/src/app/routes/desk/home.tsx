@@ -38,13 +38,27 @@ export default function DeskHomeRoute() {
           }
         />
         <LandingCard
-          title="No bookings to show yet"
-          status="Booking requests and the day board will appear here."
-          upcoming={[
-            'See every booking request and confirm or reschedule it',
-            'The day board: bays as columns, the day or the week as rows',
-            'Revise a quote and e-mail it to the customer',
-          ]}
+          title="Day board"
+          status="Bays across, the day's working time down: every booking and hold in its bay, or the whole week."
+          actions={
+            <Button component={RouterLink} to={paths.desk.board.getHref()} variant="contained">
+              Open the day board
+            </Button>
+          }
+        />
+        <LandingCard
+          title="Requests and bookings"
+          status="Bookings waiting for confirmation, today's and this week's; confirm, move or cancel them."
+          actions={
+            <Button component={RouterLink} to={paths.desk.bookings.getHref()} variant="outlined">
+              Open the bookings
+            </Button>
+          }
+        />
+        <LandingCard
+          title="Coming next"
+          status="Revised quotes for booked work."
+          upcoming={['Revise a quote and e-mail it to the customer']}
         />
       </Box>
     </>

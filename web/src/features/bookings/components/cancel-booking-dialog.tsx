@@ -19,13 +19,15 @@ interface Props {
   booking: Booking;
   open: boolean;
   onClose: () => void;
+  /** The front desk cancels for the customer: the text speaks of them, not to them. */
+  forDesk?: boolean;
 }
 
 /**
  * Asks before releasing a hold or cancelling a booking, stating the workshop's cancellation
  * rule and what cancelling now would refund (the API's figure); a refusal is shown here.
  */
-export function CancelBookingDialog({ booking, open, onClose }: Props) {
+export function CancelBookingDialog({ booking, open, onClose, forDesk = false }: Props) {
   const cancel = useCancelBooking();
   const titleId = useId();
   const textId = useId();
@@ -53,9 +55,11 @@ export function CancelBookingDialog({ booking, open, onClose }: Props) {
       </DialogTitle>
       <DialogContent>
         <DialogContentText id={textId}>
-          {held
-            ? `${when} is let go straight away, and others can book it. Your quote stays as it is, so you can book another time.`
-            : `The workshop will no longer expect your vehicle on ${when}. Your quote stays as it is.`}
+          {forDesk
+            ? `${booking.customer.name}'s ${held ? 'hold on' : 'booking for'} ${when} is let go straight away and the bays are free again. The quote stays as it is. Any refund the policy allows is paid back through the payment provider.`
+            : held
+              ? `${when} is let go straight away, and others can book it. Your quote stays as it is, so you can book another time.`
+              : `The workshop will no longer expect your vehicle on ${when}. Your quote stays as it is.`}
         </DialogContentText>
         <Typography id={policyId} component="div" sx={{ mt: 2, display: 'grid', gap: 1 }}>
           <span>{cancellationPolicyText(policy)}</span>

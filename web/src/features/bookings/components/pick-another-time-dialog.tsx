@@ -23,10 +23,20 @@ import { StartPicker } from './start-picker';
 interface Props {
   booking: Booking;
   onClose: () => void;
+  /** The line above the picker; the customer's own wording unless the desk moves it. */
+  note?: string;
+  /** How the booking's present start is marked among the times. */
+  currentLabel?: string;
 }
 
 /** The picker inside the dialog: mounted only while the dialog is open, so it asks then. */
-function MoveChoice({ booking, onClose, titleId }: Props & { titleId: string }) {
+function MoveChoice({
+  booking,
+  onClose,
+  titleId,
+  note = 'Your hold stays on its present time until you move it.',
+  currentLabel,
+}: Props & { titleId: string }) {
   const choice = useStartChoice(booking.quote.versionId);
   const move = useMoveBooking();
   const { base, start } = choice;
@@ -49,10 +59,13 @@ function MoveChoice({ booking, onClose, titleId }: Props & { titleId: string }) 
           </Alert>
         ) : (
           <>
-            <Typography color="text.secondary">
-              Your hold stays on its present time until you move it.
-            </Typography>
-            <StartPicker choice={choice} currentStartUtc={booking.startUtc} headingComponent="h3">
+            <Typography color="text.secondary">{note}</Typography>
+            <StartPicker
+              choice={choice}
+              currentStartUtc={booking.startUtc}
+              currentLabel={currentLabel}
+              headingComponent="h3"
+            >
               {conflict ? (
                 <ConflictAlternatives
                   conflict={conflict}
@@ -107,8 +120,16 @@ function MoveChoice({ booking, onClose, titleId }: Props & { titleId: string }) 
   );
 }
 
-/** A held booking: choose a new day and time with the same picker as the Book step. */
-export function PickAnotherTimeDialog({ booking, open, onClose }: Props & { open: boolean }) {
+/**
+ * A booking's new day and time, with the same picker as the Book step: a customer's hold, or
+ * any booking the desk moves.
+ */
+export function PickAnotherTimeDialog({
+  booking,
+  open,
+  onClose,
+  ...wording
+}: Props & { open: boolean }) {
   const theme = useTheme();
   const phone = useMediaQuery(theme.breakpoints.down('sm'), { noSsr: true });
   const titleId = useId();
@@ -121,7 +142,7 @@ export function PickAnotherTimeDialog({ booking, open, onClose }: Props & { open
       fullWidth
       maxWidth="md"
     >
-      {open && <MoveChoice booking={booking} onClose={onClose} titleId={titleId} />}
+      {open && <MoveChoice booking={booking} onClose={onClose} titleId={titleId} {...wording} />}
     </Dialog>
   );
 }

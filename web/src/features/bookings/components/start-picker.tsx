@@ -48,6 +48,8 @@ interface Props {
   choice: StartChoice;
   /** A start to mark as the booking's present one (moving a booking). */
   currentStartUtc?: string;
+  /** How that start is marked ("your time" on the customer's screens). */
+  currentLabel?: string;
   /** Heading level of the picker's parts. */
   headingComponent?: 'h2' | 'h3';
   /** Shown under the start times (beside the calendar on wide screens): the chosen time. */
@@ -58,7 +60,13 @@ interface Props {
  * The day and time picker: a calendar of two weeks (days without a start cannot be picked,
  * and say why), the reasons listed under it, then the day's start times as buttons.
  */
-export function StartPicker({ choice, currentStartUtc, headingComponent = 'h2', children }: Props) {
+export function StartPicker({
+  choice,
+  currentStartUtc,
+  currentLabel = 'your time',
+  headingComponent = 'h2',
+  children,
+}: Props) {
   const { availability } = choice;
   const calendarHeadingId = useId();
   const timesHeadingId = useId();
@@ -216,7 +224,7 @@ export function StartPicker({ choice, currentStartUtc, headingComponent = 'h2', 
                     {formatLocalTime(start.startUtc, timeZone)}
                     {current && (
                       <Box component="span" sx={{ fontSize: '0.75rem', fontWeight: 400 }}>
-                        your time
+                        {currentLabel}
                       </Box>
                     )}
                   </Button>

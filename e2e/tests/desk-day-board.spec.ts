@@ -1,0 +1,252 @@
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Browser, Page } from 'playwright-core';
+import { checkAccessibility, waitForAnimations, type AxeFinding } from '../support/axe';
+import { holdFirstFreeTime, newCustomerWithSavedQuote } from '../support/booking-setup';
+import { launchBrowser, newPage, screenshot } from '../support/browser';
+import { artifactsDir, demoUsers, paymentsUrl } from '../support/env';
+import { getJson, postJson, signIn } from '../support/session';
+
+const JOURNEY = 'desk-day-board';
+
+/** The payments stand-in's test card that pays (fakes/payments/README.md). */
+const CARD_PAYS = '4242424242424242';
+
+interface StartOption {
+  startUtc: string;
+  localTime: string;
+  segments: { bayName: string }[];
+}
+
+interface Booking {
+  id: string;
+  reference: string;
+  state: string;
+  startUtc: string;
+  timeZone: string;
+  customer: { name: string; email: string };
+  quote: { id: string; reference: string; versionId: string; vehicleName: string };
+  segments: { bayName: string }[];
+}
+
+interface Availability {
+  days: { date: string; starts: StartOption[] }[];
+}
+
+let browser: Browser;
+const findings: AxeFinding[] = [];
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  mkdirSync(join(artifactsDir, JOURNEY), { recursive: true });
+  writeFileSync(
+    join(artifactsDir, JOURNEY, 'axe-findings.json'),
+    `${JSON.stringify(findings, null, 2)}\n`,
+  );
+});
+
+/** One of our own pages: settled and as wide as the screen, a screenshot, then axe on it. */
+async function record(page: Page, name: string, fullPage = true): Promise<void> {
+  await waitForAnimations(page);
+  await expect
+    .poll(() => page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth))
+    .toBeLessThanOrEqual(0);
+  await screenshot(page, JOURNEY, name, { fullPage });
+  findings.push(...(await checkAccessibility(page, name)));
+}
+
+async function readBooking(page: Page, bookingId: string): Promise<Booking> {
+  const answer = await getJson<Booking>(page, `/api/bookings/${bookingId}`);
+  expect(answer.status).toBe(200);
+  return answer.body;
+}
+
+/** A workshop-local date "YYYY-MM-DD" of an instant, by this Node process's time zone data. */
+function localDate(isoInstant: string, timeZone: string): string {
+  return new Intl.DateTimeFormat('en-CA', { timeZone, dateStyle: 'short' }).format(
+    new Date(isoInstant),
+  );
+}
+
+/** "Thursday 3 December", how the picker's calendar names a day (by this Node's Intl). */
+function longDate(isoDate: string): string {
+  return new Intl.DateTimeFormat('en-AU', {
+    weekday: 'long',
+    day: 'numeric',
+    month: 'long',
+    timeZone: 'UTC',
+  }).format(new Date(`${isoDate}T00:00:00Z`));
+}
+
+/** "Thu 3 Dec", how the week view names a day (by this Node's Intl). */
+function shortDate(isoDate: string): string {
+  return new Intl.DateTimeFormat('en-AU', {
+    weekday: 'short',
+    day: 'numeric',
+    month: 'short',
+    timeZone: 'UTC',
+  })
+    .format(new Date(`${isoDate}T00:00:00Z`))
+    .replace(',', '');
+}
+
+/** "07:30" → a pattern for the button "7:30 am" (the space before am may be a narrow one). */
+function clockPattern(localTime: string): RegExp {
+  const [hours, minutes] = localTime.split(':').map(Number);
+  const twelve = hours % 12 === 0 ? 12 : hours % 12;
+  const half = hours < 12 ? 'am' : 'pm';
+  return new RegExp(`^${twelve}:${String(minutes).padStart(2, '0')}\\s?${half}`, 'i');
+}
+
+/**
+ * Set-up as a customer does it, quickly: a new customer, a saved quote, a time held, and the
+ * deposit paid through the stand-in's JSON test hook; the provider's webhook makes it requested.
+ */
+async function newRequestedBooking(page: Page): Promise<Booking> {
+  const { quote } = await newCustomerWithSavedQuote(page, 'board', 'Tamsin Voller');
+  const bookingId = await holdFirstFreeTime(page, quote.id);
+  const checkout = await postJson<{ checkoutUrl: string }>(
+    page,
+    `/api/bookings/${bookingId}/deposit-checkout`,
+    {},
+  );
+  expect(checkout.status, JSON.stringify(checkout.body)).toBe(201);
+  const sessionId = new URL(checkout.body.checkoutUrl).pathname.split('/').pop() ?? '';
+  expect(sessionId).toMatch(/^cs_test_/);
+  expect(paymentsUrl, 'E2E_PAYMENTS_URL names the payments stand-in').not.toBe('');
+  const paid = await fetch(`${paymentsUrl}/__fake/pay/${sessionId}`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ card: CARD_PAYS }),
+  });
+  expect(paid.status, await paid.clone().text()).toBe(200);
+  await expect
+    .poll(async () => (await readBooking(page, bookingId)).state, {
+      timeout: 30_000,
+      interval: 500,
+    })
+    .toBe('requested');
+  return readBooking(page, bookingId);
+}
+
+describe('the front desk confirms a request and moves it on the day board', () => {
+  it('filters the requests, confirms, moves to another day and finds it on the board (desktop)', async () => {
+    const customerSide = await newPage(browser, 'desktop');
+    const { context, page } = await newPage(browser, 'desktop');
+    try {
+      const requested = await newRequestedBooking(customerSide.page);
+      const { reference, timeZone } = requested;
+
+      // 1. Requests: waiting for confirmation, searched by the customer's e-mail.
+      await signIn(page, demoUsers.desk);
+      await page.goto('/desk/bookings');
+      await page
+        .getByRole('button', { name: /^Waiting for confirmation/ })
+        .first()
+        .click();
+      await page.getByLabel('Search bookings').fill(requested.customer.email);
+      const grid = page.getByRole('grid', { name: 'Bookings' });
+      const link = grid.getByRole('link', { name: reference, exact: true });
+      await expect.poll(() => link.isVisible()).toBe(true);
+      // Only requested bookings are listed in this view.
+      const rowText = (await grid.getByRole('row').nth(1).textContent()) ?? '';
+      expect(rowText).toContain('Requested');
+      expect(rowText).toContain(requested.quote.reference);
+      expect(rowText).toContain(requested.customer.name);
+      await record(page, 'requests');
+
+      // 2. The booking: state, customer, quote; Confirm.
+      await link.click();
+      await page.waitForURL(new RegExp(`/desk/bookings/${requested.id}$`));
+      const status = page.getByRole('region', { name: 'Status', exact: true });
+      await expect
+        .poll(() => status.getByText('Requested', { exact: true }).isVisible())
+        .toBe(true);
+      expect(
+        await page.getByRole('region', { name: 'Customer', exact: true }).textContent(),
+      ).toContain(requested.customer.email);
+      expect(
+        await page
+          .getByRole('region', { name: 'Quote', exact: true })
+          .getByRole('link', { name: new RegExp(`^${requested.quote.reference}, version`) })
+          .getAttribute('href'),
+      ).toBe(`/desk/quotes/${requested.quote.id}`);
+      await record(page, 'booking-detail');
+      await status.getByRole('button', { name: 'Confirm', exact: true }).click();
+      await expect
+        .poll(() => status.getByText('Confirmed', { exact: true }).isVisible(), { timeout: 15_000 })
+        .toBe(true);
+      expect((await readBooking(page, requested.id)).state).toBe('confirmed');
+      expect(await status.getByRole('button', { name: 'Vehicle in, start work' }).count()).toBe(1);
+
+      // 3. Move it to a start on another day, among those the API offers.
+      const availability = await getJson<Availability>(
+        page,
+        `/api/availability?quoteVersionId=${requested.quote.versionId}&days=14`,
+      );
+      expect(availability.status).toBe(200);
+      const presentDay = localDate(requested.startUtc, timeZone);
+      const firstDay = availability.body.days.find((day) => day.starts.length > 0)?.date ?? '';
+      const otherDays = availability.body.days.filter(
+        (day) => day.starts.length > 0 && day.date !== presentDay,
+      );
+      const target =
+        otherDays.find((day) => day.date.slice(0, 7) === firstDay.slice(0, 7)) ?? otherDays[0];
+      expect(target, 'another day with a free start in the next two weeks').toBeDefined();
+      const newStart = target.starts[0];
+      await status.getByRole('button', { name: 'Move', exact: true }).click();
+      const dialog = page.getByRole('dialog', { name: `Pick another time for ${reference}` });
+      await expect.poll(() => dialog.isVisible()).toBe(true);
+      if (target.date.slice(0, 7) !== firstDay.slice(0, 7)) {
+        await dialog.getByRole('button', { name: 'Next month' }).click();
+      }
+      const dayCell = dialog.getByRole('gridcell', {
+        name: new RegExp(`^${longDate(target.date)}:`),
+      });
+      await expect.poll(() => dayCell.isEnabled()).toBe(true);
+      await dayCell.click();
+      const times = dialog.getByRole('group', { name: `Start times on ${longDate(target.date)}` });
+      await times.getByRole('button', { name: clockPattern(newStart.localTime) }).click();
+      await dialog.getByRole('button', { name: 'Move to this time' }).click();
+      await expect.poll(() => dialog.isVisible(), { timeout: 15_000 }).toBe(false);
+      const moved = await readBooking(page, requested.id);
+      expect(moved.startUtc).toBe(newStart.startUtc);
+      expect(moved.state).toBe('confirmed');
+
+      // 4. The day board on the new day: the block in its bay, and it opens the booking.
+      await page.getByRole('link', { name: 'This day on the board' }).click();
+      await page.waitForURL(/\/desk\/board/);
+      const board = page.getByRole('region', { name: new RegExp(longDate(target.date)) });
+      const block = board.getByRole('link', { name: new RegExp(`^${reference}, Confirmed`) });
+      await expect.poll(() => block.first().isVisible()).toBe(true);
+      const blockName = (await block.first().getAttribute('aria-label')) ?? '';
+      expect(blockName).toContain(requested.customer.name);
+      expect(blockName).toContain(requested.quote.reference);
+      await record(page, 'day-board');
+
+      // 5. The week: the day lists the booking with its start time and bays.
+      await page.getByRole('button', { name: 'Week', exact: true }).click();
+      await page.waitForURL(/view=week/);
+      const weekDay = page.getByRole('listitem', {
+        name: new RegExp(`^${shortDate(target.date)}`),
+      });
+      const weekEntry = weekDay.getByRole('link', { name: new RegExp(requested.quote.reference) });
+      await expect.poll(() => weekEntry.isVisible()).toBe(true);
+      const entryText = (await weekEntry.textContent()) ?? '';
+      expect(entryText).toContain(requested.customer.name);
+      expect(entryText).toContain(moved.segments[0].bayName);
+      await record(page, 'week-board');
+
+      await page.getByRole('button', { name: 'Day', exact: true }).click();
+      await expect.poll(() => block.first().isVisible()).toBe(true);
+      await block.first().click();
+      await page.waitForURL(new RegExp(`/desk/bookings/${requested.id}$`));
+    } finally {
+      await context.close();
+      await customerSide.context.close();
+    }
+  }, 240_000);
+});
