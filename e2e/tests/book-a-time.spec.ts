@@ -1,11 +1,8 @@
-import { mkdirSync, writeFileSync } from 'node:fs';
-import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { checkAccessibility, waitForAnimations, type AxeFinding } from '../support/axe';
-import { launchBrowser, newPage, screenshot } from '../support/browser';
+import { describe, expect, it } from 'vitest';
+import { newPage } from '../support/browser';
+import { journey } from '../support/journey';
 import { findBookablePackage } from '../support/booking-setup';
-import { artifactsDir, demoUsers } from '../support/env';
+import { demoUsers } from '../support/env';
 import { getJson, mainNavigation, postJson, signIn } from '../support/session';
 
 const JOURNEY = 'book-a-time';
@@ -78,33 +75,11 @@ function clockPattern(text: string): RegExp {
   return new RegExp(`^${text.replace(/\s+/g, '\\s*')}$`, 'i');
 }
 
-let browser: Browser;
-const findings: AxeFinding[] = [];
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  mkdirSync(join(artifactsDir, JOURNEY), { recursive: true });
-  writeFileSync(
-    join(artifactsDir, JOURNEY, 'axe-findings.json'),
-    `${JSON.stringify(findings, null, 2)}\n`,
-  );
-});
-
-/** A screenshot once the page has settled and fits the screen's width, then axe on it. */
-async function record(page: Page, name: string, fullPage = true): Promise<void> {
-  await waitForAnimations(page);
-  await expect
-    .poll(() => page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth))
-    .toBeLessThanOrEqual(0);
-  await screenshot(page, JOURNEY, name, { fullPage });
-  findings.push(...(await checkAccessibility(page, name)));
-}
+const { browser: currentBrowser, record } = journey(JOURNEY);
 
 describe('a customer books a time for a saved quote', () => {
   it('opens the Book step, picks the first free day and a time, holds it, and sees the countdown (phone)', async () => {
-    const { context, page } = await newPage(browser, 'phone');
+    const { context, page } = await newPage(currentBrowser(), 'phone');
     // Every availability answer the page gets, newest last (the one on screen).
     const answers: Availability[] = [];
     page.on('response', (response) => {
@@ -236,7 +211,7 @@ describe('a customer books a time for a saved quote', () => {
 
 describe('the manager sets up the workshop', () => {
   it('opens Manage → Workshop (desktop)', async () => {
-    const { context, page } = await newPage(browser, 'desktop');
+    const { context, page } = await newPage(currentBrowser(), 'desktop');
     try {
       await signIn(page, demoUsers.manager);
       await page.waitForURL('**/manage');

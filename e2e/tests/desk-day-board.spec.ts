@@ -1,11 +1,9 @@
-import { mkdirSync, writeFileSync } from 'node:fs';
-import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { checkAccessibility, waitForAnimations, type AxeFinding } from '../support/axe';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { holdFirstFreeTime, newCustomerWithSavedQuote } from '../support/booking-setup';
-import { launchBrowser, newPage, screenshot } from '../support/browser';
-import { artifactsDir, demoUsers, paymentsUrl } from '../support/env';
+import { newPage } from '../support/browser';
+import { journey } from '../support/journey';
+import { demoUsers, paymentsUrl } from '../support/env';
 import { getJson, postJson, signIn } from '../support/session';
 
 const JOURNEY = 'desk-day-board';
@@ -34,29 +32,7 @@ interface Availability {
   days: { date: string; starts: StartOption[] }[];
 }
 
-let browser: Browser;
-const findings: AxeFinding[] = [];
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  mkdirSync(join(artifactsDir, JOURNEY), { recursive: true });
-  writeFileSync(
-    join(artifactsDir, JOURNEY, 'axe-findings.json'),
-    `${JSON.stringify(findings, null, 2)}\n`,
-  );
-});
-
-/** One of our own pages: settled and as wide as the screen, a screenshot, then axe on it. */
-async function record(page: Page, name: string, fullPage = true): Promise<void> {
-  await waitForAnimations(page);
-  await expect
-    .poll(() => page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth))
-    .toBeLessThanOrEqual(0);
-  await screenshot(page, JOURNEY, name, { fullPage });
-  findings.push(...(await checkAccessibility(page, name)));
-}
+const { browser: currentBrowser, record } = journey(JOURNEY);
 
 async function readBooking(page: Page, bookingId: string): Promise<Booking> {
   const answer = await getJson<Booking>(page, `/api/bookings/${bookingId}`);
@@ -134,8 +110,8 @@ async function newRequestedBooking(page: Page): Promise<Booking> {
 
 describe('the front desk confirms a request and moves it on the day board', () => {
   it('filters the requests, confirms, moves to another day and finds it on the board (desktop)', async () => {
-    const customerSide = await newPage(browser, 'desktop');
-    const { context, page } = await newPage(browser, 'desktop');
+    const customerSide = await newPage(currentBrowser(), 'desktop');
+    const { context, page } = await newPage(currentBrowser(), 'desktop');
     try {
       const requested = await newRequestedBooking(customerSide.page);
       const { reference, timeZone } = requested;

@@ -1,11 +1,9 @@
-import { mkdirSync, writeFileSync } from 'node:fs';
-import { join } from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { checkAccessibility, waitForAnimations, type AxeFinding } from '../support/axe';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
 import { holdFirstFreeTime, newCustomerWithSavedQuote } from '../support/booking-setup';
-import { launchBrowser, newPage, screenshot } from '../support/browser';
-import { artifactsDir, baseUrl, paymentsUrl } from '../support/env';
+import { newPage, screenshot } from '../support/browser';
+import { journey } from '../support/journey';
+import { baseUrl, paymentsUrl } from '../support/env';
 import { waitForMessage } from '../support/inbox';
 import { getJson } from '../support/session';
 
@@ -55,29 +53,7 @@ function futureExpiry(): string {
   return `12/${String(year).padStart(2, '0')}`;
 }
 
-let browser: Browser;
-const findings: AxeFinding[] = [];
-beforeAll(async () => {
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  mkdirSync(join(artifactsDir, JOURNEY), { recursive: true });
-  writeFileSync(
-    join(artifactsDir, JOURNEY, 'axe-findings.json'),
-    `${JSON.stringify(findings, null, 2)}\n`,
-  );
-});
-
-/** One of our own pages: settled and as wide as the screen, a screenshot, then axe on it. */
-async function record(page: Page, name: string, fullPage = true): Promise<void> {
-  await waitForAnimations(page);
-  await expect
-    .poll(() => page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth))
-    .toBeLessThanOrEqual(0);
-  await screenshot(page, JOURNEY, name, { fullPage });
-  findings.push(...(await checkAccessibility(page, name)));
-}
+const { browser: currentBrowser, record } = journey(JOURNEY);
 
 async function readBooking(page: Page, bookingId: string): Promise<Booking> {
   const answer = await getJson<Booking>(page, `/api/bookings/${bookingId}`);
@@ -115,7 +91,7 @@ async function fillCard(page: Page, number: string): Promise<void> {
 
 describe('a customer pays the deposit for a held time', () => {
   it('pays on the provider’s page, comes back to "Payment received", and the booking is Requested (phone)', async () => {
-    const { context, page } = await newPage(browser, 'phone');
+    const { context, page } = await newPage(currentBrowser(), 'phone');
     try {
       // Set-up: a new customer, a saved quote of theirs, a time held through the Book step.
       const { customer, quote } = await newCustomerWithSavedQuote(page, 'payer', 'Sam Payer');
@@ -221,7 +197,7 @@ describe('a customer pays the deposit for a held time', () => {
   }, 240_000);
 
   it('is declined on the provider’s page and comes back to a booking still held (phone)', async () => {
-    const { context, page } = await newPage(browser, 'phone');
+    const { context, page } = await newPage(currentBrowser(), 'phone');
     try {
       const { quote } = await newCustomerWithSavedQuote(page, 'declined', 'Jo Declined');
       const bookingId = await holdFirstFreeTime(page, quote.id);
