@@ -3,21 +3,19 @@ import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
-import Link from '@mui/material/Link';
 import Typography from '@mui/material/Typography';
 import EditCalendarOutlined from '@mui/icons-material/EditCalendarOutlined';
 import EventBusyOutlined from '@mui/icons-material/EventBusyOutlined';
 import { useId, useState } from 'react';
 import { Link as RouterLink } from 'react-router';
 import { paths } from '@/config/paths';
-import { formatCents } from '@/lib/money';
 import type { Booking } from '@/types/api';
 import { useNow } from '../hooks/use-now';
 import { bookingStateDescriptions, formatLocalDateTime } from '../utils/booking-text';
 import { AskToMoveDialog } from './ask-to-move-dialog';
 import { BookingStateChip } from './booking-state-chip';
 import { CancelBookingDialog } from './cancel-booking-dialog';
-import { DetailList, DetailRow } from './detail-list';
+import { BookingQuoteRows } from './booking-quote-rows';
 import { HoldCountdown } from './hold-countdown';
 import { PayDeposit } from './pay-deposit';
 import { PaymentsSummary } from './payments-summary';
@@ -168,22 +166,7 @@ export function BookingDetail({ booking, quoteHref, onHoldExpired }: Props) {
           <Typography id={quoteHeadingId} variant="h2" sx={{ fontSize: '1.2rem', mb: 1.5 }}>
             The quote
           </Typography>
-          <DetailList>
-            <DetailRow
-              label="Quote"
-              value={
-                <Link component={RouterLink} to={quoteHref}>
-                  {booking.quote.reference}, version {booking.quote.versionNumber}
-                </Link>
-              }
-            />
-            <DetailRow label="Vehicle" value={booking.quote.vehicleName} />
-            <DetailRow
-              label="Total"
-              value={<strong>{formatCents(booking.quote.totalCents)}</strong>}
-            />
-            <DetailRow label="Deposit" value={formatCents(booking.quote.depositCents)} />
-          </DetailList>
+          <BookingQuoteRows booking={booking} quoteHref={quoteHref} />
         </CardContent>
       </Card>
 

@@ -13,14 +13,13 @@ import EventAvailableOutlined from '@mui/icons-material/EventAvailableOutlined';
 import EventBusyOutlined from '@mui/icons-material/EventBusyOutlined';
 import HandymanOutlined from '@mui/icons-material/HandymanOutlined';
 import { useId, useState, type ReactNode } from 'react';
-import { Link as RouterLink } from 'react-router';
 import { isApiError } from '@/lib/api-client';
-import { formatCents } from '@/lib/money';
 import type { AdvanceBookingRequest, Booking, BookingState } from '@/types/api';
 import { useAdvanceBooking } from '../api/advance-booking';
 import { bookingStateLabels, formatLocalDateTime, formatLocalTime } from '../utils/booking-text';
 import { BookingStateChip } from './booking-state-chip';
 import { CancelBookingDialog } from './cancel-booking-dialog';
+import { BookingQuoteRows } from './booking-quote-rows';
 import { DetailList, DetailRow } from './detail-list';
 import { PaymentsSummary } from './payments-summary';
 import { PickAnotherTimeDialog } from './pick-another-time-dialog';
@@ -225,22 +224,7 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
         </Section>
 
         <Section title="Quote">
-          <DetailList>
-            <DetailRow
-              label="Quote"
-              value={
-                <Link component={RouterLink} to={quoteHref}>
-                  {booking.quote.reference}, version {booking.quote.versionNumber}
-                </Link>
-              }
-            />
-            <DetailRow label="Vehicle" value={booking.quote.vehicleName} />
-            <DetailRow
-              label="Total"
-              value={<strong>{formatCents(booking.quote.totalCents)}</strong>}
-            />
-            <DetailRow label="Deposit" value={formatCents(booking.quote.depositCents)} />
-          </DetailList>
+          <BookingQuoteRows booking={booking} quoteHref={quoteHref} />
         </Section>
 
         <Section title="Payments">
