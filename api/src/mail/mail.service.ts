@@ -41,6 +41,7 @@ export class MailService implements OnApplicationShutdown {
         filename: attachment.filename,
         contentType: attachment.contentType,
         content: attachment.content,
+        ...(attachment.encoding ? { encoding: attachment.encoding } : {}),
       })),
     });
   }

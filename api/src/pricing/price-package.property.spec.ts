@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { pricePackage } from './price-package';
+import { pricePackage, workshopDiscountLimitCents } from './price-package';
 import { validatePricingInput } from './pricing-input';
 import {
   packageLineArb,
@@ -140,6 +140,22 @@ describe('pricePackage properties', () => {
           expect(discount.amountCents).toBeLessThanOrEqual(0);
           expect(-discount.amountCents).toBeLessThanOrEqual(price.breakdown.partsCents);
         }
+      }),
+      RUNS,
+    );
+  });
+
+  it('takes the workshop discount off after everything else, never below zero', () => {
+    fc.assert(
+      fc.property(anyPackageArb, (input) => {
+        const price = pricePackage(input);
+        const limit = workshopDiscountLimitCents(input);
+        const applied = Math.min(input.workshopDiscountCents ?? 0, limit);
+        const discounts = price.lines.filter((line) => line.kind === 'workshop-discount');
+        expect(discounts).toHaveLength(applied > 0 ? 1 : 0);
+        expect(price.breakdown.workshopDiscountCents).toBe(0 - applied);
+        expect(price.subtotalCents).toBe(limit - applied);
+        if (discounts.length > 0) expect(price.lines.at(-1)).toBe(discounts[0]);
       }),
       RUNS,
     );

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { pricePackage } from './price-package';
+import { pricePackage, workshopDiscountLimitCents } from './price-package';
 import {
   alignmentLine,
   demoPackage,
@@ -49,6 +49,7 @@ describe('pricePackage: the worked example (prices include GST, per-invoice)', (
       fittingBalancingCents: 17500,
       tyreDisposalCents: 3250,
       bundleDiscountCents: -28170,
+      workshopDiscountCents: 0,
     });
   });
 
@@ -336,5 +337,37 @@ describe('pricePackage: line rules', () => {
       depositCents: 0,
       balanceDueCents: 0,
     });
+  });
+});
+
+describe('pricePackage: a workshop discount on a revised quote', () => {
+  it('comes off last and the GST is one eleventh of what is left (prices include GST)', () => {
+    const price = pricePackage({ ...threeLinesAt1995(), workshopDiscountCents: 985 });
+    expect(price.lines.at(-1)).toMatchObject({
+      kind: 'workshop-discount',
+      amountCents: -985,
+    });
+    expect(price.breakdown.workshopDiscountCents).toBe(-985);
+    expect(price.subtotalCents).toBe(5985 - 985);
+    // Source: A New Tax System (Goods and Services Tax) Act 1999 (GST-inclusive price ÷ 11 at a 10 % rate) and s 9-90 (rounding): $50.00 ÷ 11 = 4.5454… → $4.55.
+    expect(price.taxCents).toBe(455);
+    expect(price.totalCents).toBe(5000);
+  });
+
+  it('takes its share of the per-line GST, so a discount of everything leaves no tax', () => {
+    const policy = policyWith({ pricesIncludeTax: false, taxRoundingMethod: 'per-line' });
+    const half = pricePackage({ ...threeLinesAt1995(policy), workshopDiscountCents: 2993 });
+    // Source: same Act s 9-70 and s 9-90: $2.00 of GST a line, $6.00 for three (above); the discount of 2 993 of 5 985 cents takes 6.00 × 2 993 / 5 985 = 3.0005 → $3.00 of it.
+    expect(half.taxCents).toBe(300);
+    expect(half.totalCents).toBe(5985 - 2993 + 300);
+    const all = pricePackage({ ...threeLinesAt1995(policy), workshopDiscountCents: 5985 });
+    expect(all.taxCents).toBe(0);
+    expect(all.totalCents).toBe(0);
+  });
+
+  it('never takes the package below zero: at most the subtotal before it is applied', () => {
+    const input = { ...threeLinesAt1995(), workshopDiscountCents: 1_000_000 };
+    expect(workshopDiscountLimitCents(input)).toBe(5985);
+    expect(pricePackage(input).totalCents).toBe(0);
   });
 });

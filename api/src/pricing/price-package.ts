@@ -12,7 +12,13 @@ import {
   bundleDiscountCents,
   bundleDiscountTaxCents,
 } from './bundle-discount';
-import { type Cents, formatCents, multiplyCents, sumCents } from './cents';
+import {
+  type Cents,
+  formatCents,
+  multiplyCents,
+  multiplyDivideRoundHalfUp,
+  sumCents,
+} from './cents';
 import { depositFor, isSpecialOrder } from './deposit';
 import { labourCents } from './labour';
 import { assertValidPricingInput } from './pricing-input';
@@ -27,11 +33,21 @@ import {
   type PricedPartLine,
   type PricedServiceLine,
   type PricedTyreDisposalLine,
+  type PricedWorkshopDiscountLine,
   type PricingInput,
   isPartKind,
 } from './pricing.types';
 import { roundingNote } from './rounding-note';
 import { type TaxBasis, taxBasis, taxOfAmountCents } from './tax';
+
+/**
+ * The most a workshop discount can take off this package: its subtotal before the discount.
+ * Callers refuse a larger discount with this figure in the message.
+ */
+export function workshopDiscountLimitCents(input: PricingInput): Cents {
+  const { workshopDiscountCents: _ignored, ...withoutDiscount } = input;
+  return pricePackage(withoutDiscount).subtotalCents;
+}
 
 /**
  * Price a package. Throws PricingInputError (with field-level issues) for input that
@@ -140,11 +156,25 @@ export function pricePackage(input: PricingInput): PackagePrice {
     ...(disposalLine ? [disposalLine] : []),
     ...(discountLine ? [discountLine] : []),
   ];
+  const workshopDiscountCents = Math.min(
+    input.workshopDiscountCents ?? 0,
+    sumCents(lines.map((line) => line.amountCents)),
+  );
+  const workshopDiscountLine: PricedWorkshopDiscountLine | null =
+    workshopDiscountCents > 0
+      ? {
+          kind: 'workshop-discount',
+          description: 'Workshop discount',
+          amountCents: 0 - workshopDiscountCents,
+          taxCents: null,
+        }
+      : null;
+  if (workshopDiscountLine) lines.push(workshopDiscountLine);
   const subtotalCents = sumCents(lines.map((line) => line.amountCents));
 
   let taxCents: Cents;
   if (perLine) {
-    taxCents = applyPerLineTax(lines, partLines, discountLine, basis);
+    taxCents = applyPerLineTax(lines, partLines, discountLine, workshopDiscountLine, basis);
   } else {
     taxCents = taxOfAmountCents(subtotalCents, basis);
   }
@@ -162,6 +192,7 @@ export function pricePackage(input: PricingInput): PackagePrice {
     fittingBalancingCents: fittingLine?.amountCents ?? 0,
     tyreDisposalCents: disposalLine?.amountCents ?? 0,
     bundleDiscountCents: discountLine?.amountCents ?? 0,
+    workshopDiscountCents: workshopDiscountLine?.amountCents ?? 0,
   };
 
   return {
@@ -195,22 +226,36 @@ export function pricePackage(input: PricingInput): PackagePrice {
 }
 
 /**
- * Per-line rounding: each line's tax is rounded on that line; the discount line's tax is the
- * discount percentage of the parts lines' tax (see bundle-discount.ts). Sets `taxCents` on every
+ * Per-line rounding: each line's tax is rounded on that line; the bundle discount's tax is the
+ * discount percentage of the parts lines' tax (see bundle-discount.ts); the workshop discount
+ * takes its share of the other lines' tax. Sets `taxCents` on every
  * line and returns their sum.
  */
 function applyPerLineTax(
   lines: PricedLine[],
   partLines: readonly PricedPartLine[],
   discountLine: PricedBundleDiscountLine | null,
+  workshopDiscountLine: PricedWorkshopDiscountLine | null,
   basis: TaxBasis,
 ): Cents {
   for (const line of lines) {
-    if (line !== discountLine) line.taxCents = taxOfAmountCents(line.amountCents, basis);
+    if (line !== discountLine && line !== workshopDiscountLine) {
+      line.taxCents = taxOfAmountCents(line.amountCents, basis);
+    }
   }
   if (discountLine) {
     const partsTaxCents = sumCents(partLines.map((line) => line.taxCents ?? 0));
     discountLine.taxCents = 0 - bundleDiscountTaxCents(partsTaxCents, discountLine.percent);
+  }
+  if (workshopDiscountLine) {
+    // The discount takes the same share of the tax as of the amount, so the tax falls to zero
+    // with the total and never exceeds it.
+    const others = lines.filter((line) => line !== workshopDiscountLine);
+    const beforeCents = sumCents(others.map((line) => line.amountCents));
+    const beforeTaxCents = sumCents(others.map((line) => line.taxCents ?? 0));
+    workshopDiscountLine.taxCents =
+      0 -
+      multiplyDivideRoundHalfUp(beforeTaxCents, 0 - workshopDiscountLine.amountCents, beforeCents);
   }
   return sumCents(lines.map((line) => line.taxCents ?? 0));
 }

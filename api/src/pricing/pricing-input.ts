@@ -61,6 +61,9 @@ export function validatePricingInput(input: PricingInput): PricingIssue[] {
   checkWhole(input.wheelsFitted, 'wheelsFitted', 0, MAX_WHEELS_PER_JOB, 'wheels', report);
   checkWhole(input.tyresReplaced, 'tyresReplaced', 0, MAX_WHEELS_PER_JOB, 'tyres', report);
   validatePolicy(input.policy, 'policy', report);
+  if (input.workshopDiscountCents !== undefined) {
+    checkCents(input.workshopDiscountCents, 'workshopDiscountCents', MAX_UNIT_PRICE_CENTS, report);
+  }
   return issues;
 }
 

@@ -166,9 +166,17 @@ export const policyArb: fc.Arbitrary<PricingPolicy> = fc
     };
   });
 
-export const pricingInputArb: fc.Arbitrary<PricingInput> = fc.record({
-  lines: fc.array(packageLineArb, { maxLength: 12 }),
-  wheelsFitted: fc.integer({ min: 0, max: 6 }),
-  tyresReplaced: fc.integer({ min: 0, max: 6 }),
-  policy: policyArb,
-});
+export const pricingInputArb: fc.Arbitrary<PricingInput> = fc.record(
+  {
+    lines: fc.array(packageLineArb, { maxLength: 12 }),
+    wheelsFitted: fc.integer({ min: 0, max: 6 }),
+    tyresReplaced: fc.integer({ min: 0, max: 6 }),
+    policy: policyArb,
+    // Small, large and beyond-the-package discounts (the engine applies at most the subtotal).
+    workshopDiscountCents: fc.oneof(
+      fc.integer({ min: 0, max: 5_000 }),
+      fc.integer({ min: 0, max: 5_000_000 }),
+    ),
+  },
+  { requiredKeys: ['lines', 'wheelsFitted', 'tyresReplaced', 'policy'] },
+);

@@ -102,10 +102,22 @@ export interface PricingInput {
   /** Old tyres the workshop takes back (tyre disposal levy). */
   tyresReplaced: number;
   policy: PricingPolicy;
+  /**
+   * A discount the desk gives on a revised quote, whole cents, taken off after the bundle
+   * discount. It never takes the package below zero: the engine applies at most the subtotal
+   * before it (`workshopDiscountLimitCents`), and the caller refuses a larger request.
+   */
+  workshopDiscountCents?: Cents;
 }
 
 export type PricedLineKind =
-  'part' | 'service' | 'labour' | 'fitting-balancing' | 'tyre-disposal' | 'bundle-discount';
+  | 'part'
+  | 'service'
+  | 'labour'
+  | 'fitting-balancing'
+  | 'tyre-disposal'
+  | 'bundle-discount'
+  | 'workshop-discount';
 
 interface PricedLineCommon {
   /** Plain words for the quote. */
@@ -173,7 +185,12 @@ export interface PricedBundleDiscountLine extends PricedLineCommon {
   discountedCents: Cents;
 }
 
+export interface PricedWorkshopDiscountLine extends PricedLineCommon {
+  kind: 'workshop-discount';
+}
+
 export type PricedLine =
+  | PricedWorkshopDiscountLine
   | PricedPartLine
   | PricedServiceLine
   | PricedLabourLine
@@ -205,10 +222,15 @@ export interface PriceBreakdown {
   tyreDisposalCents: Cents;
   /** Zero or negative. */
   bundleDiscountCents: Cents;
+  /** Zero or negative (absent from versions saved before the desk could give one). */
+  workshopDiscountCents: Cents;
 }
 
 export interface PackagePrice {
-  /** Parts, services, labour, fitting & balancing, tyre disposal, bundle discount, in that order. */
+  /**
+   * Parts, services, labour, fitting & balancing, tyre disposal, bundle discount, workshop
+   * discount, in that order.
+   */
   lines: PricedLine[];
   breakdown: PriceBreakdown;
   /** The sum of the lines, exactly (tax included when `pricesIncludeTax`). */

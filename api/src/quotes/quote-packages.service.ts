@@ -7,9 +7,10 @@ import { CustomerVehicle } from '../customer-vehicles/entities/customer-vehicle.
 import { FitReportsService, isMadeFor, vehicleName } from '../fit-reports/fit-reports.service';
 import { attributesOf } from '../fit-reports/fitment-input.mapper';
 import type { FitReport } from '../fitment/fitment.types';
-import { pricePackage } from '../pricing/price-package';
+import { formatCents } from '../pricing/cents';
+import { pricePackage, workshopDiscountLimitCents } from '../pricing/price-package';
 import { validatePricingInput } from '../pricing/pricing-input';
-import type { PackageLine, PackagePrice } from '../pricing/pricing.types';
+import type { PackageLine, PackagePrice, PricingInput } from '../pricing/pricing.types';
 import { quoteValidUntilDate } from '../pricing/quote-validity';
 import type { User } from '../users/entities/user.entity';
 import { VehicleModel } from '../vehicles/entities/vehicle-model.entity';
@@ -36,15 +37,18 @@ export function isPolicyChargedService(product: Product): boolean {
   return role === 'fitting-balancing' || role === 'tyre-disposal';
 }
 
-/** One line of the request: a product id and a quantity. */
+/** One line of the request: a product id and a quantity (and, on a revision, its labour). */
 export interface PackageItem {
   productId: string;
   quantity: number;
+  /** The desk's labour minutes per unit on a revised quote, instead of the catalogue's. */
+  labourMinutes?: number;
 }
 
 export interface SelectedItem {
   product: Product;
   quantity: number;
+  labourMinutes?: number;
 }
 
 /**
@@ -89,7 +93,11 @@ export function selectionErrors(
       add(key, `${product.name} (${product.sku}) is not made for the ${vehicleName(vehicle)}`);
       return;
     }
-    selected.push({ product, quantity: item.quantity });
+    selected.push({
+      product,
+      quantity: item.quantity,
+      ...(item.labourMinutes !== undefined ? { labourMinutes: item.labourMinutes } : {}),
+    });
   });
   for (const single of SINGLE_KINDS) {
     const count = selected.filter((entry) => entry.product.kind === single.kind).length;
@@ -98,8 +106,15 @@ export function selectionErrors(
   return { errors, selected };
 }
 
-/** The pricing engine's line for a product at today's catalogue values. */
-export function packageLineOf(product: Product, quantity: number): PackageLine {
+/**
+ * The pricing engine's line for a product at today's catalogue values; a revision may give the
+ * labour minutes per unit instead of the catalogue's.
+ */
+export function packageLineOf(
+  product: Product,
+  quantity: number,
+  labourMinutes: number = product.labourMinutes,
+): PackageLine {
   const isService = product.kind === 'service';
   return {
     productId: product.id,
@@ -109,7 +124,7 @@ export function packageLineOf(product: Product, quantity: number): PackageLine {
     kind: product.kind,
     quantity,
     unitPriceCents: product.priceCents,
-    labourMinutes: product.labourMinutes,
+    labourMinutes,
     bayKind: product.bayKind,
     leadDays: product.leadDays,
     stockQty: product.stockQty,
@@ -143,6 +158,8 @@ export interface PackageRequest {
   vehicleYear?: number;
   constantLoadKg?: number;
   items: readonly PackageItem[];
+  /** A revision's workshop discount, whole cents. */
+  discountCents?: number;
 }
 
 /** A checked, priced and fit-checked package, ready to preview or to save as a version. */
@@ -212,7 +229,9 @@ export class QuotePackagesService {
     }
 
     const { selected } = selection;
-    const lines = selected.map((entry) => packageLineOf(entry.product, entry.quantity));
+    const lines = selected.map((entry) =>
+      packageLineOf(entry.product, entry.quantity, entry.labourMinutes),
+    );
     const { wheelsFitted, tyresReplaced } = wheelAndTyreCounts(selected);
     const constantLoadKg = request.constantLoadKg ?? 0;
     // With a kit, one more query finds its other spring ratings (the report may suggest one).
@@ -224,7 +243,13 @@ export class QuotePackagesService {
       constantLoadKg,
     );
 
-    const input = { lines, wheelsFitted, tyresReplaced, policy: settings.pricingPolicy };
+    const input: PricingInput = {
+      lines,
+      wheelsFitted,
+      tyresReplaced,
+      policy: settings.pricingPolicy,
+      ...(request.discountCents ? { workshopDiscountCents: request.discountCents } : {}),
+    };
     const issues = validatePricingInput(input);
     if (issues.length > 0) {
       // Catalogue values are validated on every write, so this is the stored policy's fault.
@@ -241,6 +266,19 @@ export class QuotePackagesService {
         );
       }
       throw new FieldErrorsException(lineIssues, 'The package cannot be priced');
+    }
+    if (input.workshopDiscountCents !== undefined) {
+      const limit = workshopDiscountLimitCents(input);
+      if (input.workshopDiscountCents > limit) {
+        throw new FieldErrorsException(
+          {
+            discountCents: [
+              `must not be more than ${formatCents(limit)}, the package before the discount`,
+            ],
+          },
+          'The package cannot be priced',
+        );
+      }
     }
     const price = pricePackage(input);
 

@@ -95,6 +95,7 @@ function quantityText(line: PricedLine): string {
     case 'labour':
       return `${line.labourMinutes} min`;
     case 'bundle-discount':
+    case 'workshop-discount':
       return '';
     default:
       return String(line.quantity);
@@ -107,6 +108,8 @@ function unitText(line: PricedLine): string {
       return `${formatCents(line.labourRateCentsPerHour)}/h`;
     case 'bundle-discount':
       return `${line.percent} %`;
+    case 'workshop-discount':
+      return '';
     default:
       return formatCents(line.unitPriceCents);
   }

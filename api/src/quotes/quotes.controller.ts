@@ -34,11 +34,16 @@ import { QuoteListResponse } from './dto/quote-summary.response';
 import { QuoteVersionParams } from './dto/quote-version.params';
 import { QuoteResponse } from './dto/quote.response';
 import { QuotesService } from './quotes.service';
+import { RevisionPreviewDto, ReviseQuoteDto } from './dto/revise-quote.dto';
+import { QuoteRevisionsService } from './quote-revisions.service';
 
 @ApiTags('quotes')
 @Controller('quotes')
 export class QuotesController {
-  constructor(private readonly quotes: QuotesService) {}
+  constructor(
+    private readonly quotes: QuotesService,
+    private readonly revisions: QuoteRevisionsService,
+  ) {}
 
   @Public()
   @ComputesOnly()
@@ -148,5 +153,43 @@ export class QuotesController {
   })
   send(@Param() params: QuoteVersionParams, @CurrentUser() user: User): Promise<QuoteResponse> {
     return this.quotes.send(params.id, params.n, user);
+  }
+
+  @Roles('desk', 'manager')
+  @Post(':id/revisions/preview')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({
+    summary:
+      'Price and fit-check a revision of the quote (parts, quantities, labour per line, a workshop discount); writes nothing',
+  })
+  @ApiOkResponse({ type: QuotePreviewResponse })
+  @ApiBadRequestResponse({ type: ErrorResponse })
+  @ApiNotFoundResponse({ type: ErrorResponse })
+  previewRevision(
+    @Param() params: IdParams,
+    @Body() dto: RevisionPreviewDto,
+    @CurrentUser() user: User,
+  ): Promise<QuotePreviewResponse> {
+    return this.revisions.preview(params.id, dto, user);
+  }
+
+  @Roles('desk', 'manager')
+  @Post(':id/revisions')
+  @ApiOperation({
+    summary:
+      'Save a revision as the next version, sent to the customer with the reason (the version before is superseded); the customer is e-mailed the PDF and a link to compare and answer',
+  })
+  @ApiCreatedResponse({ type: QuoteResponse })
+  @ApiBadRequestResponse({
+    description: 'fieldErrors; a package that does not fit is refused with fieldErrors.items',
+    type: ErrorResponse,
+  })
+  @ApiNotFoundResponse({ type: ErrorResponse })
+  revise(
+    @Param() params: IdParams,
+    @Body() dto: ReviseQuoteDto,
+    @CurrentUser() user: User,
+  ): Promise<QuoteResponse> {
+    return this.revisions.revise(params.id, dto, user);
   }
 }

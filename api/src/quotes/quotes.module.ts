@@ -17,6 +17,8 @@ import { QuotesController } from './quotes.controller';
 import { CatalogueSnapshotService } from './catalogue-snapshot.service';
 import { PackageDataLoader } from './package-data.loader';
 import { QuotesService } from './quotes.service';
+import { QuoteAcceptanceHooks } from './quote-acceptance';
+import { QuoteRevisionsService } from './quote-revisions.service';
 
 @Module({
   imports: [
@@ -40,7 +42,9 @@ import { QuotesService } from './quotes.service';
     PlannerService,
     PackageDataLoader,
     CatalogueSnapshotService,
+    QuoteRevisionsService,
+    QuoteAcceptanceHooks,
   ],
-  exports: [QuotesService],
+  exports: [QuotesService, QuoteAcceptanceHooks],
 })
 export class QuotesModule {}

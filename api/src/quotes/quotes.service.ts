@@ -30,7 +30,12 @@ import {
   isBookable,
   sendRefusal,
 } from './quote-lifecycle';
-import { QuotePackagesService, type VehicleOwnerRule } from './quote-packages.service';
+import { QuoteAcceptanceHooks } from './quote-acceptance';
+import {
+  type PricedPackage,
+  QuotePackagesService,
+  type VehicleOwnerRule,
+} from './quote-packages.service';
 import { renderQuotePdf } from './quote-pdf';
 import {
   quoteNumberFromSearch,
@@ -79,6 +84,7 @@ export class QuotesService {
     private readonly workshop: WorkshopService,
     private readonly notifications: NotificationsService,
     private readonly config: AppConfigService,
+    private readonly acceptance: QuoteAcceptanceHooks,
   ) {}
 
   async preview(dto: QuotePackageDto, user: User | null): Promise<QuotePreviewResponse> {
@@ -162,38 +168,12 @@ export class QuotesService {
       quote.uses = [...dto.uses];
       quote.constantLoadKg = priced.constantLoadKg;
       quote.createdAt = now;
-      const version = new QuoteVersion({
-        quote,
+      const { version, lines } = newVersionOf(quote, priced, {
         number: 1,
         state: savedByCustomer ? 'sent' : 'draft',
         createdBy: user,
-        wheelsFitted: priced.wheelsFitted,
-        tyresReplaced: priced.tyresReplaced,
-        validUntilDate: priced.validUntilDate,
-        validUntil: priced.validUntil,
-        price: priced.price,
-        fitReport: priced.fitReport,
+        now,
       });
-      version.createdAt = now;
-      version.stateChangedAt = now;
-      const lines = priced.selected.map(
-        ({ product, quantity }, index) =>
-          new QuoteLine(version, {
-            position: index + 1,
-            product,
-            sku: product.sku,
-            name: product.name,
-            brand: product.brand,
-            kind: product.kind,
-            quantity,
-            unitPriceCents: product.priceCents,
-            labourMinutes: product.labourMinutes,
-            bayKind: product.bayKind,
-            leadDays: product.leadDays,
-            stockQty: product.stockQty,
-            perWheel: priced.lines[index].perWheel === true,
-          }),
-      );
       for (const photo of photos) {
         photo.quote = quote;
         // The photos belong to the customer from now on (they see them with the quote).
@@ -303,8 +283,17 @@ export class QuotesService {
     const version = versionOf(quote, versionNumber);
     const now = new Date();
     await this.persistExpiry([version], now);
+    const bytes = await this.renderPdf(quote, version, now);
+    return { fileName: quotePdfFileName(quote.number, version.number), bytes };
+  }
+
+  /**
+   * The version as a PDF, from the rows given (the quote populated as `loadVisible` does), for
+   * the download and for the revised-quote e-mail.
+   */
+  async renderPdf(quote: Quote, version: QuoteVersion, now: Date): Promise<Buffer> {
     const settings = await this.workshop.settings();
-    const bytes = await renderQuotePdf({
+    return renderQuotePdf({
       card: settings.card,
       reference: quoteReference(quote.number),
       versionNumber: version.number,
@@ -323,7 +312,6 @@ export class QuotesService {
       fitReport: version.fitReport,
       createdAt: version.createdAt,
     });
-    return { fileName: quotePdfFileName(quote.number, version.number), bytes };
   }
 
   /** The customer accepts (or declines) the latest sent version; 409 with the reason otherwise. */
@@ -389,13 +377,18 @@ export class QuotesService {
       }
       version.state = next;
       version.stateChangedAt = now;
+      if (next === 'accepted') {
+        // A booking on an earlier version follows the accepted one (or is flagged to move).
+        await this.acceptance.run({ em, quote, version, actor: user, now });
+      }
       return null;
     });
     if (refusal) throw new ConflictException(refusal);
     return this.get(id, user);
   }
 
-  private async loadVisible(id: string, user: User): Promise<Quote> {
+  /** The quote with its versions and lines, as the desk or its customer may see it; else 404. */
+  async loadVisible(id: string, user: User): Promise<Quote> {
     const quote = await this.em.findOne(
       Quote,
       seesEveryQuote(user) ? { id } : { id, customer: user.id },
@@ -515,4 +508,48 @@ function versionResponseOf(
     bookable: isBookable(version, latestNumber, now),
     pdfUrl: quotePdfUrl(quote.id, version.number),
   };
+}
+
+/**
+ * A new version of `quote` from a priced package, with its lines (the catalogue values it was
+ * priced from, the labour as priced): not persisted.
+ */
+export function newVersionOf(
+  quote: Quote,
+  priced: PricedPackage,
+  fields: { number: number; state: QuoteVersionState; createdBy: User; now: Date },
+): { version: QuoteVersion; lines: QuoteLine[] } {
+  const version = new QuoteVersion({
+    quote,
+    number: fields.number,
+    state: fields.state,
+    createdBy: fields.createdBy,
+    wheelsFitted: priced.wheelsFitted,
+    tyresReplaced: priced.tyresReplaced,
+    validUntilDate: priced.validUntilDate,
+    validUntil: priced.validUntil,
+    price: priced.price,
+    fitReport: priced.fitReport,
+  });
+  version.createdAt = fields.now;
+  version.stateChangedAt = fields.now;
+  const lines = priced.selected.map(
+    ({ product, quantity }, index) =>
+      new QuoteLine(version, {
+        position: index + 1,
+        product,
+        sku: product.sku,
+        name: product.name,
+        brand: product.brand,
+        kind: product.kind,
+        quantity,
+        unitPriceCents: product.priceCents,
+        labourMinutes: priced.lines[index].labourMinutes,
+        bayKind: product.bayKind,
+        leadDays: product.leadDays,
+        stockQty: product.stockQty,
+        perWheel: priced.lines[index].perWheel === true,
+      }),
+  );
+  return { version, lines };
 }

@@ -9,6 +9,8 @@ export interface ReceivedMail {
   subject: string;
   text: string;
   html: string;
+  /** The attachments as the parser found them (bytes decoded from their transfer encoding). */
+  attachments: { filename: string; contentType: string; content: Buffer }[];
   raw: string;
 }
 
@@ -40,6 +42,11 @@ export class Mailbox {
                 subject: parsed.subject ?? '',
                 text: parsed.text ?? '',
                 html: typeof parsed.html === 'string' ? parsed.html : '',
+                attachments: parsed.attachments.map((attachment) => ({
+                  filename: attachment.filename ?? '',
+                  contentType: attachment.contentType,
+                  content: attachment.content,
+                })),
                 raw,
               });
               callback();

@@ -10,8 +10,10 @@ export interface MailAttachment {
   filename: string;
   /** The full MIME type, with its parameters (e.g. `text/calendar; charset=utf-8; method=REQUEST`). */
   contentType: string;
-  /** Text content (an iCalendar object). */
+  /** Text content (an iCalendar object), or base64 of binary content (a PDF). */
   content: string;
+  /** `base64` when `content` is base64 of bytes; absent for text. */
+  encoding?: 'base64';
 }
 
 /** A customer message as the outbox keeps it: the content, its attachments and its envelope. */

@@ -10,6 +10,7 @@ const PRICED_LINE_KINDS = [
   'fitting-balancing',
   'tyre-disposal',
   'bundle-discount',
+  'workshop-discount',
 ];
 
 /**
@@ -105,6 +106,9 @@ export class PriceBreakdownResponse {
 
   @ApiProperty({ description: 'Zero or negative' })
   bundleDiscountCents!: number;
+
+  @ApiProperty({ description: "Zero or negative: the desk's discount on a revised quote" })
+  workshopDiscountCents!: number;
 }
 
 export class DepositOutcomeResponse {
@@ -176,6 +180,8 @@ export class PackagePriceResponse {
 
   static from(price: PackagePrice): PackagePriceResponse {
     // The engine's result and a loaded snapshot are both fresh objects of this request: no copy.
+    // Versions saved before the desk could give a discount have no workshop discount figure.
+    price.breakdown.workshopDiscountCents ??= 0;
     return Object.assign(new PackagePriceResponse(), price);
   }
 }
