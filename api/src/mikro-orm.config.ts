@@ -2,6 +2,7 @@ import { join } from 'node:path';
 import { Migrator } from '@mikro-orm/migrations';
 import { defineConfig, type Options } from '@mikro-orm/postgresql';
 import { SeedManager } from '@mikro-orm/seeder';
+import { BookingEvent } from './bookings/entities/booking-event.entity';
 import { Booking } from './bookings/entities/booking.entity';
 import { Reservation } from './bookings/entities/reservation.entity';
 import { AuthThrottleCounter } from './auth/entities/auth-throttle-counter.entity';
@@ -60,6 +61,7 @@ export function createOrmConfig(databaseUrl: string, { writeSnapshot = true } = 
       Closure,
       HolidayOverride,
       Booking,
+      BookingEvent,
       Reservation,
       Payment,
       Refund,

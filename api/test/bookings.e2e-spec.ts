@@ -115,6 +115,8 @@ describe('bookings: availability, holds, moves and the database guard', () => {
   });
 
   afterAll(async () => {
+    // Leave no mail behind: the next spec's application would have to deliver it.
+    await testApp.outboxIdle(25_000);
     await testApp.db.query(
       `delete from booking where quote_version_id in
          (select id from quote_version where quote_id = any($1::uuid[]))`,

@@ -244,6 +244,8 @@ describe('payments: deposit checkout, webhooks, refunds and receipts', () => {
   });
 
   afterAll(async () => {
+    // Leave no mail behind: the next spec's application would have to deliver it.
+    await testApp.outboxIdle(25_000);
     await setPolicy(48, 0);
     const bookings = `select b.id from booking b join quote_version v on v.id = b.quote_version_id
                        where v.quote_id = any($1::uuid[])`;

@@ -194,6 +194,50 @@ describe('quotes: revisions by the desk', () => {
     await post(customer, `/api/quotes/${quote.id}/versions/2/accept`).expect(409);
   });
 
+  it('moves a held booking to the accepted revision and re-plans its bay time', async () => {
+    const quote = await customerQuote();
+    const availability = await customer.agent
+      .get('/api/availability')
+      .query({ quoteVersionId: quote.versions[0].id })
+      .expect(200);
+    const starts = (
+      availability.body as { days: Array<{ starts: Array<{ startUtc: string }> }> }
+    ).days.flatMap((day) => day.starts);
+    // A start two days out or more, so the lead time and the day's end leave room to re-plan.
+    const start = starts.find((option) => Date.parse(option.startUtc) > Date.now() + 48 * 3600_000);
+    expect(start).toBeDefined();
+    const held = await post(customer, '/api/bookings', {
+      quoteVersionId: quote.versions[0].id,
+      start: start!.startUtc,
+    });
+    expect(held.status, JSON.stringify(held.body)).toBe(201);
+    const before = held.body as { id: string; startUtc: string; endUtc: string };
+
+    // 60 more minutes on the kit (the hoist bay).
+    await post(desk, `/api/quotes/${quote.id}/revisions`, revision()).expect(201);
+    await post(customer, `/api/quotes/${quote.id}/versions/2/accept`).expect(200);
+
+    const after = (await customer.agent.get(`/api/bookings/${before.id}`).expect(200)).body as {
+      startUtc: string;
+      endUtc: string;
+      quote: { versionNumber: number };
+      needsMove: { reason: string } | null;
+      events: Array<{ kind: string }>;
+    };
+    expect(after.quote.versionNumber).toBe(2);
+    const last = after.events.at(-1)?.kind;
+    if (after.needsMove) {
+      // It no longer fits at that start: the time is kept and the desk is asked to move it.
+      expect(last).toBe('needs-move');
+      expect(after.endUtc).toBe(before.endUtc);
+    } else {
+      expect(last).toBe('re-planned');
+      expect(after.startUtc).toBe(before.startUtc);
+      expect(after.endUtc).not.toBe(before.endUtc);
+    }
+    await post(customer, `/api/bookings/${before.id}/cancel`).expect(200);
+  });
+
   it('is refused for the customer and the technician, and for another quote id (404)', async () => {
     const quote = await customerQuote();
     await post(customer, `/api/quotes/${quote.id}/revisions`, revision()).expect(403);

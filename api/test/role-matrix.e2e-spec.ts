@@ -68,6 +68,9 @@ const INTENDED_ACCESS: Record<string, Principal[]> = {
   'POST /api/quotes/:id/versions/:n/accept': ['customer'],
   'POST /api/quotes/:id/versions/:n/decline': ['customer'],
   'POST /api/quotes/:id/versions/:n/send': ['desk', 'manager'],
+  // Issue 7: the desk revises a quote.
+  'POST /api/quotes/:id/revisions/preview': ['desk', 'manager'],
+  'POST /api/quotes/:id/revisions': ['desk', 'manager'],
   // Issue 4: customer photos and customers for walk-in quotes. The matrix sends POST
   // /api/uploads as JSON, not multipart: allowed callers get 400 (no photo), which is enough to
   // tell them from the refused ones (401/403 come from the guards before the body is read).
@@ -99,6 +102,10 @@ const INTENDED_ACCESS: Record<string, Principal[]> = {
   // Issue 6: deposits. The webhook is public (the provider calls it, proving itself by the
   // signature; every principal here gets 400 for the missing one).
   'POST /api/bookings/:id/deposit-checkout': ['customer', 'desk', 'manager'],
+  // Issue 7: the difference when an accepted revision raised the deposit.
+  'POST /api/bookings/:id/top-up-checkout': ['customer', 'desk', 'manager'],
+  // Issue 7: the desk marks the vehicle in.
+  'POST /api/bookings/:id/arrived': ['desk', 'manager'],
   'POST /api/payments/webhook': PRINCIPALS,
 };
 

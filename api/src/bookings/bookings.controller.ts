@@ -148,6 +148,29 @@ export class BookingsController {
     return this.bookings.depositCheckout(params.id, user);
   }
 
+  @Roles('customer', 'desk', 'manager')
+  @Post('bookings/:id/top-up-checkout')
+  @ApiOperation({
+    summary:
+      'The payment page for the difference when an accepted revision raised the deposit (requested or confirmed bookings)',
+  })
+  @ApiCreatedResponse({ type: DepositCheckoutResponse })
+  @ApiNotFoundResponse({ type: ErrorResponse })
+  @ApiConflictResponse({
+    description: 'Nothing is due, or the booking is not requested or confirmed',
+    type: ErrorResponse,
+  })
+  @ApiBadGatewayResponse({
+    description: 'The payment provider cannot be reached: nothing changed',
+    type: ErrorResponse,
+  })
+  topUpCheckout(
+    @Param() params: IdParams,
+    @CurrentUser() user: User,
+  ): Promise<DepositCheckoutResponse> {
+    return this.bookings.topUpCheckout(params.id, user);
+  }
+
   @Roles('desk', 'manager')
   @Post('bookings/:id/advance')
   @HttpCode(HttpStatus.OK)
@@ -163,6 +186,21 @@ export class BookingsController {
     @CurrentUser() user: User,
   ): Promise<BookingResponse> {
     return this.bookings.advance(params.id, dto, user);
+  }
+
+  @Roles('desk', 'manager')
+  @Post('bookings/:id/arrived')
+  @HttpCode(HttpStatus.OK)
+  @ApiOperation({
+    summary: 'Mark the vehicle as arrived (on site) on a requested or confirmed booking',
+  })
+  @ApiOkResponse({ type: BookingResponse })
+  @ApiConflictResponse({
+    description: 'Already marked in, or not requested or confirmed',
+    type: ErrorResponse,
+  })
+  markArrived(@Param() params: IdParams, @CurrentUser() user: User): Promise<BookingResponse> {
+    return this.bookings.markArrived(params.id, user);
   }
 
   @Roles('customer')

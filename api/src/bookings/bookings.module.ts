@@ -7,20 +7,22 @@ import { WorkshopModule } from '../workshop/workshop.module';
 import { AvailabilityService } from './availability.service';
 import { BookingsController } from './bookings.controller';
 import { BookingsService } from './bookings.service';
+import { BookingEvent } from './entities/booking-event.entity';
 import { Booking } from './entities/booking.entity';
 import { Reservation } from './entities/reservation.entity';
 import { HoldSweeperService } from './hold-sweeper.service';
+import { ReminderSweeperService } from './reminder-sweeper.service';
 
 @Module({
   imports: [
-    MikroOrmModule.forFeature([Booking, Reservation]),
+    MikroOrmModule.forFeature([Booking, BookingEvent, Reservation]),
     QuotesModule,
     WorkshopModule,
     PaymentsModule,
     NotificationsModule,
   ],
   controllers: [BookingsController],
-  providers: [BookingsService, AvailabilityService, HoldSweeperService],
-  exports: [BookingsService, AvailabilityService, HoldSweeperService],
+  providers: [BookingsService, AvailabilityService, HoldSweeperService, ReminderSweeperService],
+  exports: [BookingsService, AvailabilityService, HoldSweeperService, ReminderSweeperService],
 })
 export class BookingsModule {}

@@ -1,5 +1,10 @@
 import { EntityManager } from '@mikro-orm/postgresql';
-import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import {
+  ConflictException,
+  Injectable,
+  NotFoundException,
+  type OnModuleInit,
+} from '@nestjs/common';
 import { FieldErrorsException } from '../common/errors/field-errors.exception';
 import { TimeTakenException } from '../common/errors/time-taken.exception';
 import { vehicleName } from '../fit-reports/fit-reports.service';
@@ -9,9 +14,12 @@ import {
   bookingMovedMessage,
   refundIssuedMessage,
 } from '../notifications/messages/booking-messages';
+import { amount, workshopDateTime } from '../notifications/messages/customer-message';
 import { NotificationsService } from '../notifications/notifications.service';
 import { PaymentsService } from '../payments/payments.service';
 import { QuoteVersion } from '../quotes/entities/quote-version.entity';
+import { QuoteAcceptanceHooks, type QuoteAcceptedEvent } from '../quotes/quote-acceptance';
+import { effectiveState } from '../quotes/quote-lifecycle';
 import { quoteReference } from '../quotes/quote-reference';
 import { QuotesService } from '../quotes/quotes.service';
 import { type StartOption, startOptionAt } from '../scheduling/availability';
@@ -19,6 +27,8 @@ import type { User } from '../users/entities/user.entity';
 import { Bay } from '../workshop/entities/bay.entity';
 import { type WorkshopSettings, WorkshopService, loadWorkshop } from '../workshop/workshop.service';
 import { AvailabilityService, type BusyExclusion } from './availability.service';
+import type { BookingEventKind } from './booking-event-kinds';
+import { bayTimeInWords, recordBookingEvent, sameBayTime } from './booking-events';
 import { type BookingState, bookingReference } from './booking-states';
 import { isCalendarDate, startOptionResponse, utcIso, zonedIso } from './booking-times';
 import type {
@@ -45,6 +55,16 @@ const BOOKING_STEPS: Record<AdvanceBookingDto['state'], BookingState> = {
   completed: 'in-progress',
 };
 
+/** Each desk step's line in the audit trail. */
+const STEP_EVENTS: Record<AdvanceBookingDto['state'], [BookingEventKind, string]> = {
+  confirmed: ['confirmed', 'Confirmed by the workshop.'],
+  'in-progress': ['started', 'Work started.'],
+  completed: ['completed', 'Work completed.'],
+};
+
+/** States whose booking follows its quote to an accepted revision. */
+const REPLANNED_STATES: readonly BookingState[] = ['held', 'requested', 'confirmed'];
+
 /** Roles that see and manage every booking. */
 const DESK_ROLES = ['desk', 'manager'] as const;
 /** Tries of a hold or move whose bay was taken by a concurrent request: then another bay is tried. */
@@ -66,7 +86,11 @@ const POPULATE = [
   'quoteVersion',
   'quoteVersion.quote',
   'quoteVersion.quote.vehicleModel',
+  'quoteVersion.quote.customerVehicle',
+  'quoteVersion.quote.versions',
   'payments',
+  'events',
+  'events.actor',
 ] as const;
 
 /**
@@ -75,7 +99,7 @@ const POPULATE = [
  * between two requests for one bay ends with one of them refused (409), never both held.
  */
 @Injectable()
-export class BookingsService {
+export class BookingsService implements OnModuleInit {
   constructor(
     private readonly em: EntityManager,
     private readonly quotes: QuotesService,
@@ -83,7 +107,13 @@ export class BookingsService {
     private readonly workshop: WorkshopService,
     private readonly payments: PaymentsService,
     private readonly notifications: NotificationsService,
+    private readonly acceptance: QuoteAcceptanceHooks,
   ) {}
+
+  /** An accepted revision of a booked quote re-plans the booking, in the accepting transaction. */
+  onModuleInit(): void {
+    this.acceptance.register((event) => this.replanOnAcceptance(event));
+  }
 
   async findAvailability(query: AvailabilityQueryDto, user: User): Promise<AvailabilityResponse> {
     const fromDate = query.from ?? (await this.availability.today());
@@ -154,6 +184,7 @@ export class BookingsService {
       booking.cancelledAt = booking.stateChangedAt;
       booking.holdExpiresAt = null;
       for (const reservation of booking.reservations) reservation.active = false;
+      recordBookingEvent(em, booking, 'cancelled', cancelledDetail(wasState, refunds), user, now);
       await this.queueCancelled(em, booking, wasState, refunds, now);
     });
     return this.get(id, user);
@@ -218,6 +249,22 @@ export class BookingsService {
     };
   }
 
+  /**
+   * The payment page for the difference when the booking's (revised) quote asks a higher deposit
+   * than was paid: while requested or confirmed; 409 when nothing is due.
+   */
+  async topUpCheckout(id: string, user: User): Promise<DepositCheckoutResponse> {
+    const checkout = await this.em.fork().transactional(async (em) => {
+      const booking = await this.lockVisible(em, id, user);
+      return this.payments.topUpCheckout(em, booking, await loadWorkshop(em), new Date());
+    });
+    return {
+      checkoutUrl: checkout.checkoutUrl,
+      expiresAt: utcIso(checkout.expiresAt.getTime()),
+      booking: await this.get(id, user),
+    };
+  }
+
   async requestMove(id: string, dto: MoveRequestDto, user: User): Promise<BookingResponse> {
     await this.em.transactional(async (em) => {
       const booking = await this.lockVisible(em, id, user);
@@ -231,6 +278,14 @@ export class BookingsService {
       }
       booking.moveRequestNote = dto.note.trim();
       booking.moveRequestedAt = new Date();
+      recordBookingEvent(
+        em,
+        booking,
+        'move-requested',
+        `The customer asked to move it: “${booking.moveRequestNote}”`,
+        user,
+        booking.moveRequestedAt,
+      );
     });
     return this.get(id, user);
   }
@@ -250,10 +305,37 @@ export class BookingsService {
       }
       booking.state = dto.state;
       booking.stateChangedAt = new Date();
+      if (dto.state === 'in-progress' && !booking.arrivedAt) {
+        booking.arrivedAt = booking.stateChangedAt;
+      }
+      const [kind, detail] = STEP_EVENTS[dto.state];
+      recordBookingEvent(em, booking, kind, detail, user, booking.stateChangedAt);
       // The customer hears of it (with the calendar entry) in the same transaction.
       if (dto.state === 'confirmed') {
         await this.notifications.queueBookingConfirmed(em, booking, booking.stateChangedAt);
       }
+    });
+    return this.get(id, user);
+  }
+
+  /**
+   * The desk marks the vehicle as arrived (on site, keys in) on a requested or confirmed booking;
+   * once only. Starting work without it records the arrival at the same moment.
+   */
+  async markArrived(id: string, user: User): Promise<BookingResponse> {
+    await this.em.transactional(async (em) => {
+      const booking = await this.lockVisible(em, id, user);
+      const reference = bookingReference(booking.number);
+      if (booking.arrivedAt) {
+        throw new ConflictException(`The vehicle for booking ${reference} is already marked in.`);
+      }
+      if (booking.state !== 'requested' && booking.state !== 'confirmed') {
+        throw new ConflictException(
+          `Booking ${reference} is ${booking.state}: a vehicle is marked in on a requested or confirmed booking.`,
+        );
+      }
+      booking.arrivedAt = new Date();
+      recordBookingEvent(em, booking, 'arrived', 'The vehicle arrived.', user, booking.arrivedAt);
     });
     return this.get(id, user);
   }
@@ -280,6 +362,128 @@ export class BookingsService {
 
   // ---- inside a transaction ---------------------------------------------------------------
 
+  /**
+   * A revised version of a booked quote was accepted (inside the accepting transaction, `em`).
+   * The quote's active booking on an earlier version follows it: relinked, and re-planned from
+   * the new version's lines. Same bay time: only the link changes. Other bay time that fits at
+   * the same start (the same availability rules, any suitable bays): the reservations are
+   * replaced here, with the bays locked (the exclusion constraint still guards), and when the
+   * times changed the customer is told as of a move. Not fitting: the old reservations stay and
+   * the desk is asked to move it (`needsMove`).
+   */
+  async replanOnAcceptance({ em, quote, version, actor, now }: QuoteAcceptedEvent): Promise<void> {
+    const [row] = await em.execute<{ id: string }[]>(
+      `select b.id from booking b join quote_version v on v.id = b.quote_version_id
+        where v.quote_id = ? and v.number < ? and b.state in (?, ?, ?)
+          and not (b.state = 'held' and b.hold_expires_at <= ?)
+        order by b.created_at desc limit 1
+        for update of b`,
+      [quote.id, version.number, ...REPLANNED_STATES, now],
+    );
+    if (!row) return;
+    const booking = await em.findOneOrFail(Booking, row.id, { populate: POPULATE });
+    const accepted = await em.findOneOrFail(QuoteVersion, version.id, {
+      populate: ['quote', 'quote.vehicleModel', 'quote.customerVehicle', 'quote.versions'] as const,
+    });
+    const timeZone = (await this.workshop.settings()).timeZone;
+    const label = `quote ${quoteReference(accepted.quote.number)} v${accepted.number}`;
+    const oldPlan = booking.plan;
+    booking.quoteVersion = accepted;
+    const context = await this.availability.context(
+      em,
+      accepted,
+      { fromDate: await this.workshop.localDate(booking.startsAt), days: 1 },
+      { bookingId: booking.id },
+      now,
+    );
+    const newPlan = context.plan;
+
+    if (sameBayTime(oldPlan, newPlan)) {
+      // The reservations are of the old plan: the same bay time, so they stand (and fit).
+      booking.plan = newPlan;
+      booking.needsMoveReason = null;
+      booking.needsMoveSince = null;
+      recordBookingEvent(
+        em,
+        booking,
+        're-planned',
+        `Now for ${label} (the revised quote was accepted). The job takes the same bay time (${bayTimeInWords(newPlan)}), so its time stays.`,
+        actor,
+        now,
+      );
+      await em.flush();
+      return;
+    }
+
+    // Other bay time: the bays are locked first (a hold in flight finishes, a new one waits for
+    // this transaction), then their busy times read again, so the time found here is still free
+    // when it is written and the acceptance is never refused by the exclusion constraint.
+    await em.execute('select id from bay where active order by id for update');
+    const fresh = await this.availability.context(
+      em,
+      accepted,
+      { fromDate: await this.workshop.localDate(booking.startsAt), days: 1 },
+      { bookingId: booking.id },
+      now,
+    );
+    const option =
+      newPlan.segments.length > 0 ? startOptionAt(fresh.query, booking.startsAt.getTime()) : null;
+    if (!option) {
+      booking.needsMoveReason = `The revised quote (${label}) needs ${bayTimeInWords(newPlan)} instead of ${bayTimeInWords(oldPlan)}, which no longer fits at ${workshopDateTime(booking.startsAt, timeZone)}. Move the booking to a time that fits.`;
+      booking.needsMoveSince = now;
+      recordBookingEvent(
+        em,
+        booking,
+        're-planned',
+        `Now for ${label} (the revised quote was accepted). Its bay time changed from ${bayTimeInWords(oldPlan)} to ${bayTimeInWords(newPlan)}; the booked time was kept.`,
+        actor,
+        now,
+      );
+      recordBookingEvent(em, booking, 'needs-move', booking.needsMoveReason, null, now);
+      await em.flush();
+      return;
+    }
+
+    const previousStartsAt = booking.startsAt;
+    const previousEndsAt = booking.endsAt;
+    for (const reservation of booking.reservations) em.remove(reservation);
+    await em.flush();
+    booking.startsAt = new Date(option.startsAtMs);
+    booking.endsAt = new Date(option.endsAtMs);
+    booking.plan = newPlan;
+    booking.needsMoveReason = null;
+    booking.needsMoveSince = null;
+    await this.reserve(em, booking, option);
+    const timesChanged =
+      booking.startsAt.getTime() !== previousStartsAt.getTime() ||
+      booking.endsAt.getTime() !== previousEndsAt.getTime();
+    recordBookingEvent(
+      em,
+      booking,
+      're-planned',
+      `Re-planned for ${label} (the revised quote was accepted): bay time ${bayTimeInWords(oldPlan)} → ${bayTimeInWords(newPlan)}; ${
+        timesChanged
+          ? `it now runs ${workshopDateTime(booking.startsAt, timeZone)} to ${workshopDateTime(booking.endsAt, timeZone)} (was to ${workshopDateTime(previousEndsAt, timeZone)})`
+          : 'the start and finish are unchanged'
+      }.`,
+      actor,
+      now,
+    );
+    if (timesChanged && booking.state !== 'held') {
+      booking.calendarSequence += 1;
+      await this.notifications.queue(em, {
+        causeKey: `booking-moved:${booking.id}:${booking.calendarSequence}`,
+        to: booking.customer.email,
+        content: bookingMovedMessage({
+          ...(await this.notifications.bookingInput(em, booking, now)),
+          previousStartsAt,
+          withCalendar: booking.state === 'confirmed',
+        }),
+      });
+    }
+    await em.flush();
+  }
+
   private async holdOnce(
     em: EntityManager,
     versionId: string,
@@ -303,6 +507,14 @@ export class BookingsService {
       booking.cancelledAt = now;
       booking.holdExpiresAt = null;
       for (const reservation of booking.reservations) reservation.active = false;
+      recordBookingEvent(
+        em,
+        booking,
+        'cancelled',
+        'Hold released: another time was picked for the same quote.',
+        user,
+        now,
+      );
     }
     await em.flush();
 
@@ -319,6 +531,14 @@ export class BookingsService {
     });
     em.persist(booking);
     await this.reserve(em, booking, option);
+    recordBookingEvent(
+      em,
+      booking,
+      'held',
+      `Held for ${workshopDateTime(booking.startsAt, settings.timeZone)} (quote ${quoteReference(version.quote.number)} v${version.number}) until ${workshopDateTime(booking.holdExpiresAt!, settings.timeZone)}.`,
+      user,
+      now,
+    );
     await em.flush();
     return booking.id;
   }
@@ -359,6 +579,17 @@ export class BookingsService {
       );
     }
     await this.reserve(em, booking, option);
+    const hadToMove = booking.needsMoveReason !== null;
+    booking.needsMoveReason = null;
+    booking.needsMoveSince = null;
+    recordBookingEvent(
+      em,
+      booking,
+      'moved',
+      `Moved from ${workshopDateTime(previousStartsAt, settings.timeZone)} to ${workshopDateTime(booking.startsAt, settings.timeZone)}${hadToMove ? ', to fit the revised quote' : ''}.`,
+      user,
+      now,
+    );
     if (booking.state !== 'held') {
       // A held time is the customer's own choice; a requested or confirmed one is told.
       booking.calendarSequence += 1;
@@ -514,6 +745,9 @@ export class BookingsService {
     const version = booking.quoteVersion;
     const quote = version.quote;
     const reservations = booking.reservations.getItems();
+    const latest = quote.versions
+      .getItems()
+      .reduce((highest, candidate) => (candidate.number > highest.number ? candidate : highest));
     const money = paymentSummary({
       state: booking.state,
       startsAtMs: booking.startsAt.getTime(),
@@ -554,12 +788,25 @@ export class BookingsService {
         totalCents: version.totalCents,
         depositCents: version.depositCents,
         vehicleName: vehicleName(quote.vehicleModel),
+        latestVersionNumber: latest.number,
+        latestVersionState: effectiveState(latest, new Date(nowMs)),
       },
       customer: {
         id: booking.customer.id,
         name: booking.customer.name,
         email: booking.customer.email,
       },
+      rego: quote.customerVehicle?.rego ?? null,
+      needsMove:
+        booking.needsMoveReason && booking.needsMoveSince
+          ? { reason: booking.needsMoveReason, since: utcIso(booking.needsMoveSince.getTime()) }
+          : null,
+      events: booking.events.getItems().map((event) => ({
+        at: utcIso(event.at.getTime()),
+        kind: event.kind,
+        actor: event.actor ? { name: event.actor.name, role: event.actor.role } : null,
+        detail: event.detail,
+      })),
       moveRequest:
         booking.moveRequestNote && booking.moveRequestedAt
           ? {
@@ -567,8 +814,20 @@ export class BookingsService {
               requestedAt: utcIso(booking.moveRequestedAt.getTime()),
             }
           : null,
+      arrivedAt: booking.arrivedAt ? utcIso(booking.arrivedAt.getTime()) : null,
       ...money,
       createdAt: utcIso(booking.createdAt.getTime()),
     };
   }
+}
+
+/** The cancellation's line in the audit trail: what was given back. */
+function cancelledDetail(
+  wasState: BookingState,
+  refunds: { amountCents: number; payment: { currency: string } }[],
+): string {
+  if (wasState === 'held' && refunds.length === 0) return 'Hold released.';
+  if (refunds.length === 0) return 'Cancelled; nothing refunded under the cancellation policy.';
+  const total = refunds.reduce((sum, refund) => sum + refund.amountCents, 0);
+  return `Cancelled; ${amount(total, refunds[0].payment.currency)} refunded under the cancellation policy.`;
 }

@@ -1,4 +1,5 @@
 import type { EntityManager } from '@mikro-orm/postgresql';
+import { EXPIRED_DETAIL } from './booking-event-kinds';
 
 /** SQLSTATE of an exclusion-constraint refusal (PostgreSQL, Appendix A: exclusion_violation). */
 export const EXCLUSION_VIOLATION = '23P01';
@@ -18,7 +19,8 @@ export function isOverlapRefusal(error: unknown): boolean {
 /**
  * Marks every hold whose time has run out as expired and releases its bays, in one statement
  * (inside the caller's transaction when there is one). Safe to run from any number of
- * processes at once. Returns how many holds expired.
+ * processes at once. Each expired hold gets its audit event (no actor: the system) in the same
+ * statement. Returns how many holds expired.
  */
 export async function expireLapsedHolds(em: EntityManager, now: Date): Promise<number> {
   const rows = await em.execute<{ id: string }[]>(
@@ -28,9 +30,12 @@ export async function expireLapsedHolds(em: EntityManager, now: Date): Promise<n
         returning id),
      released as (
        update reservation set active = false, updated_at = ?
-        where active and booking_id in (select id from lapsed))
+        where active and booking_id in (select id from lapsed)),
+     logged as (
+       insert into booking_event (id, created_at, updated_at, booking_id, at, kind, actor_id, detail)
+       select gen_random_uuid(), ?, ?, id, ?, 'expired', null, ? from lapsed)
      select id from lapsed`,
-    [now, now, now, now],
+    [now, now, now, now, now, now, now, EXPIRED_DETAIL],
   );
   return rows.length;
 }

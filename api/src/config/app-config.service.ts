@@ -57,6 +57,11 @@ export class AppConfigService {
     return this.config.get('HOLD_SWEEP_SECONDS', { infer: true }) * 1000;
   }
 
+  /** 0: the day-before reminder sweep is off. */
+  get reminderSweepMs(): number {
+    return this.config.get('REMINDER_SWEEP_SECONDS', { infer: true }) * 1000;
+  }
+
   get sessionIdleMs(): number {
     return this.config.get('SESSION_IDLE_MINUTES', { infer: true }) * 60_000;
   }

@@ -29,6 +29,7 @@ describe('validateEnvironment', () => {
       SESSION_IDLE_MINUTES: 30,
       SESSION_MAX_HOURS: 12,
       HOLD_SWEEP_SECONDS: 60,
+      REMINDER_SWEEP_SECONDS: 900,
       TRUST_PROXY: false,
     });
     expect(environment.WEB_DIST_DIR).toBeUndefined();
@@ -115,6 +116,10 @@ describe('validateEnvironment', () => {
     [
       { PAYMENTS_WEBHOOK_SECRET: 'secret' },
       'Configuration error: PAYMENTS_WEBHOOK_SECRET must be a webhook signing secret starting with whsec_',
+    ],
+    [
+      { REMINDER_SWEEP_SECONDS: '-1' },
+      'Configuration error: REMINDER_SWEEP_SECONDS must be a whole number of seconds between 0 and 86400',
     ],
     [
       { PAYMENTS_API_URL: '127.0.0.1:12111' },

@@ -180,6 +180,16 @@ export class Environment extends DatabaseEnvironment {
   @Max(3600, { message: '$property must be a whole number of seconds between 1 and 3600' })
   HOLD_SWEEP_SECONDS = 60;
 
+  /**
+   * How often confirmed bookings starting tomorrow (workshop time) get their reminder queued;
+   * 0 turns the sweep off. Under NODE_ENV=test it runs only when a test calls it.
+   */
+  @Transform(toWholeNumber)
+  @IsInt({ message: '$property must be a whole number of seconds between 0 and 86400' })
+  @Min(0, { message: '$property must be a whole number of seconds between 0 and 86400' })
+  @Max(86400, { message: '$property must be a whole number of seconds between 0 and 86400' })
+  REMINDER_SWEEP_SECONDS = 900;
+
   @Transform(toBoolean)
   @IsBoolean({ message: '$property must be true or false' })
   TRUST_PROXY = false;
@@ -285,6 +295,7 @@ const ENVIRONMENT_KEYS = [
   'SESSION_IDLE_MINUTES',
   'SESSION_MAX_HOURS',
   'HOLD_SWEEP_SECONDS',
+  'REMINDER_SWEEP_SECONDS',
   'TRUST_PROXY',
   'OUTBOX_WORKER',
   'OUTBOX_RETRY_LIMIT',

@@ -6,6 +6,8 @@ import { Migration20261202025114 } from './migrations/Migration20261202025114';
 import { Migration20261202063421 } from './migrations/Migration20261202063421';
 import { Migration20261202070312 } from './migrations/Migration20261202070312';
 import { Migration20261202072618 } from './migrations/Migration20261202072618';
+import { Migration20261202140007 } from './migrations/Migration20261202140007';
+import { Migration20261202142024 } from './migrations/Migration20261202142024';
 
 /**
  * Every migration, oldest first. Listed explicitly (rather than found by a file glob) so the same
@@ -20,4 +22,6 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261202063421', class: Migration20261202063421 },
   { name: 'Migration20261202070312', class: Migration20261202070312 },
   { name: 'Migration20261202072618', class: Migration20261202072618 },
+  { name: 'Migration20261202140007', class: Migration20261202140007 },
+  { name: 'Migration20261202142024', class: Migration20261202142024 },
 ];

@@ -19,12 +19,16 @@ function payment(fields: Partial<PaymentFacts>): PaymentFacts {
   };
 }
 
-function summary(state: Parameters<typeof paymentSummary>[0]['state'], payments: PaymentFacts[]) {
+function summary(
+  state: Parameters<typeof paymentSummary>[0]['state'],
+  payments: PaymentFacts[],
+  depositCents = 100000,
+) {
   return paymentSummary({
     state,
     startsAtMs: NOW + 72 * HOUR,
     totalCents: 500000,
-    depositCents: 100000,
+    depositCents,
     payments,
     policy,
     nowMs: NOW,
@@ -69,5 +73,34 @@ describe('paymentSummary', () => {
       cancellationPolicy: { refundIfCancelledNowCents: 0 },
     });
     expect(summary('expired', []).balanceDueCents).toBe(0);
+  });
+
+  it('tops up a higher deposit by the difference and counts the top-up as deposit paid', () => {
+    // A revision raised the deposit from 100 000 c to 130 000 c: 30 000 c is due.
+    expect(summary('requested', [payment({})], 130000)).toMatchObject({
+      depositDueCents: 130000,
+      depositPaidCents: 100000,
+      depositTopUpCents: 30000,
+      balanceDueCents: 400000,
+    });
+    const toppedUp = summary(
+      'confirmed',
+      [payment({}), payment({ id: 'p2', kind: 'top-up', amountCents: 30000 })],
+      130000,
+    );
+    expect(toppedUp).toMatchObject({
+      depositPaidCents: 130000,
+      depositTopUpCents: 0,
+      // total − (paid − refunded) = 500 000 − 130 000.
+      balanceDueCents: 370000,
+      cancellationPolicy: { refundIfCancelledNowCents: 130000 },
+    });
+    // A part refunded is no longer held: it is due again.
+    expect(summary('confirmed', [payment({ refundedCents: 10000 })]).depositTopUpCents).toBe(10000);
+    // Not while held (the deposit itself is paid then), nor once the work has started.
+    expect(summary('held', [], 130000).depositTopUpCents).toBe(0);
+    expect(summary('in-progress', [payment({})], 130000).depositTopUpCents).toBe(0);
+    // A lower deposit owes nothing and gives nothing back by itself.
+    expect(summary('requested', [payment({})], 80000).depositTopUpCents).toBe(0);
   });
 });

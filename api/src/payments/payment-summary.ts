@@ -39,6 +39,7 @@ export interface PaymentSummary {
   }[];
   depositDueCents: number;
   depositPaidCents: number;
+  depositTopUpCents: number;
   refundedCents: number;
   balanceDueCents: number;
   cancellationPolicy: CancellationPolicy & { refundIfCancelledNowCents: number };
@@ -49,9 +50,26 @@ const CANCELLABLE: readonly BookingState[] = ['held', 'requested', 'confirmed', 
 /** States in which nothing more is owed: the work will not be done. */
 const CLOSED_WITHOUT_WORK: readonly BookingState[] = ['cancelled', 'expired'];
 
+/** States in which a higher deposit (after an accepted revision) can be topped up. */
+export const TOP_UP_STATES: readonly BookingState[] = ['requested', 'confirmed'];
+
 /** What is still held of a paid payment: paid minus refunded. */
 export function heldCents(payment: Pick<PaymentFacts, 'status' | 'amountCents' | 'refundedCents'>) {
   return payment.status === 'paid' ? Math.max(0, payment.amountCents - payment.refundedCents) : 0;
+}
+
+/**
+ * What a top-up checkout would charge now: the version's deposit minus what the deposit and
+ * earlier top-ups paid and still hold; 0 when none is due or the state does not allow one.
+ */
+export function topUpDueCents(input: {
+  state: BookingState;
+  depositCents: number;
+  payments: readonly Pick<PaymentFacts, 'kind' | 'status' | 'amountCents' | 'refundedCents'>[];
+}): number {
+  if (!TOP_UP_STATES.includes(input.state)) return 0;
+  const held = input.payments.reduce((sum, payment) => sum + heldCents(payment), 0);
+  return Math.max(0, input.depositCents - held);
 }
 
 export function paymentSummary(input: PaymentSummaryInput): PaymentSummary {
@@ -82,9 +100,9 @@ export function paymentSummary(input: PaymentSummaryInput): PaymentSummary {
       refundedCents: payment.refundedCents,
     })),
     depositDueCents: input.depositCents,
-    depositPaidCents: paid
-      .filter((payment) => payment.kind === 'deposit')
-      .reduce((sum, payment) => sum + payment.amountCents, 0),
+    // The deposit and its top-ups together: what was paid towards the deposit.
+    depositPaidCents: paid.reduce((sum, payment) => sum + payment.amountCents, 0),
+    depositTopUpCents: topUpDueCents(input),
     refundedCents,
     balanceDueCents: CLOSED_WITHOUT_WORK.includes(input.state)
       ? 0

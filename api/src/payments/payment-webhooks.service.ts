@@ -8,6 +8,8 @@ import { vehicleName } from '../fit-reports/fit-reports.service';
 import { quoteReference } from '../quotes/quote-reference';
 import { loadWorkshop } from '../workshop/workshop.service';
 import { bookingRequestedMessage } from '../notifications/messages/booking-messages';
+import { amount } from '../notifications/messages/customer-message';
+import { recordBookingEvent } from '../bookings/booking-events';
 import {
   depositReceiptMail,
   type DepositReceiptMailInput,
@@ -15,7 +17,7 @@ import {
 import { NotificationsService } from '../notifications/notifications.service';
 import { Payment } from './entities/payment.entity';
 import { Refund } from './entities/refund.entity';
-import { paymentSummary } from './payment-summary';
+import { heldCents, paymentSummary } from './payment-summary';
 import { PAYMENTS_CLIENT, type PaymentsClient } from './payments-client';
 import { PaymentsService } from './payments.service';
 
@@ -175,7 +177,10 @@ export class PaymentWebhooksService {
   /**
    * The payment is paid: the booking's hold becomes a request. When the booking is no longer
    * held (cancelled or run out before the payment came in) or its deposit was already paid, it
-   * is not revived: the payment is refunded in full. Already paid: nothing changes.
+   * is not revived: the payment is refunded in full. Already paid: nothing changes. A top-up
+   * leaves the state as it is; one for a booking that is over, or beyond what was due, is
+   * refunded in full. Each outcome is written to the booking's audit trail (no actor: the
+   * provider).
    */
   private async recordPaid(
     em: EntityManager,
@@ -188,10 +193,16 @@ export class PaymentWebhooksService {
       await em.flush();
       return;
     }
+    if (payment.kind === 'top-up') {
+      await this.recordTopUpPaid(em, payment, paymentIntentId, paidAt);
+      return;
+    }
     payment.status = 'paid';
     payment.paymentIntentId ??= paymentIntentId;
     payment.paidAt = paidAt;
     const booking = payment.booking;
+    const now = new Date();
+    const paid = amount(payment.amountCents, payment.currency);
     const alreadyPaid = booking.payments
       .getItems()
       .some((other) => other !== payment && other.kind === 'deposit' && other.status === 'paid');
@@ -199,8 +210,17 @@ export class PaymentWebhooksService {
     const requested = booking.state === 'held' && !alreadyPaid;
     if (requested) {
       booking.state = 'requested';
-      booking.stateChangedAt = new Date();
+      booking.stateChangedAt = now;
       booking.holdExpiresAt = null;
+      recordBookingEvent(em, booking, 'deposit-paid', `Deposit of ${paid} paid.`, null, now);
+      recordBookingEvent(
+        em,
+        booking,
+        'requested',
+        'Requested: waiting for the workshop to confirm the time.',
+        null,
+        now,
+      );
     } else {
       const why = alreadyPaid
         ? 'The deposit was already paid by another payment: this one back in full.'
@@ -208,6 +228,14 @@ export class PaymentWebhooksService {
       await em.flush();
       const refund = await this.payments.refundInFull(em, booking, payment, why);
       refundedInFullCents = refund?.amountCents;
+      recordBookingEvent(
+        em,
+        booking,
+        'deposit-paid',
+        `Deposit of ${paid} paid; ${refund ? `${amount(refund.amountCents, payment.currency)} refunded` : 'nothing refunded'}: ${why}`,
+        null,
+        now,
+      );
     }
     await em.flush();
     // In this transaction: the messages exist exactly when the payment is recorded.
@@ -227,6 +255,59 @@ export class PaymentWebhooksService {
         ),
       });
     }
+  }
+
+  /**
+   * A paid top-up: recorded without changing the booking's state. When the booking is over
+   * (cancelled or expired) or the deposit was already made up by another payment, the
+   * whole payment goes back, as a late deposit does. A receipt is queued either way.
+   */
+  private async recordTopUpPaid(
+    em: EntityManager,
+    payment: Payment,
+    paymentIntentId: string | null,
+    paidAt: Date,
+  ): Promise<void> {
+    const booking = payment.booking;
+    const now = new Date();
+    // Judged by the other payments as they are now: was anything still due?
+    const heldByOthers = booking.payments
+      .getItems()
+      .filter((other) => other !== payment)
+      .reduce((sum, other) => sum + heldCents(other), 0);
+    const over = booking.state === 'cancelled' || booking.state === 'expired';
+    const keep = !over && heldByOthers < booking.quoteVersion.depositCents;
+    payment.status = 'paid';
+    payment.paymentIntentId ??= paymentIntentId;
+    payment.paidAt = paidAt;
+    const paid = amount(payment.amountCents, payment.currency);
+    let refundedInFullCents: number | undefined;
+    if (keep) {
+      recordBookingEvent(em, booking, 'top-up-paid', `Deposit top-up of ${paid} paid.`, null, now);
+    } else {
+      const why = over
+        ? `Paid after the booking was ${booking.state}: the whole payment back.`
+        : 'The deposit was already paid in full: this top-up back in full.';
+      await em.flush();
+      const refund = await this.payments.refundInFull(em, booking, payment, why);
+      refundedInFullCents = refund?.amountCents;
+      recordBookingEvent(
+        em,
+        booking,
+        'top-up-paid',
+        `Deposit top-up of ${paid} paid; ${refund ? `${amount(refund.amountCents, payment.currency)} refunded` : 'nothing refunded'}: ${why}`,
+        null,
+        now,
+      );
+    }
+    await em.flush();
+    await this.notifications.queue(em, {
+      causeKey: `deposit-receipt:${payment.id}`,
+      to: booking.customer.email,
+      content: depositReceiptMail(
+        await this.receiptInput(em, booking, payment, refundedInFullCents),
+      ),
+    });
   }
 
   /** Records each refund of the charge not yet recorded, and the charge's refunded total. */
@@ -293,6 +374,7 @@ export class PaymentWebhooksService {
       amountPaidCents: payment.amountCents,
       paidAt: payment.paidAt ?? new Date(),
       balanceDueCents: summary.balanceDueCents,
+      kind: payment.kind,
       ...(refundedInFullCents !== undefined ? { refundedInFullCents } : {}),
     };
   }

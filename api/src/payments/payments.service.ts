@@ -10,7 +10,8 @@ import { quoteReference } from '../quotes/quote-reference';
 import type { Workshop } from '../workshop/entities/workshop.entity';
 import { Payment } from './entities/payment.entity';
 import { Refund } from './entities/refund.entity';
-import { heldCents } from './payment-summary';
+import type { PaymentKind } from './payment-states';
+import { TOP_UP_STATES, heldCents, topUpDueCents } from './payment-summary';
 import { PAYMENTS_CLIENT, type PaymentsClient } from './payments-client';
 import { isIdempotencyConflict, providerFailure } from './provider-errors';
 
@@ -30,9 +31,10 @@ export interface DepositCheckout {
 }
 
 /** A payment's reference for the provider's metadata and our messages. */
-function depositDescription(booking: Booking): string {
+function paymentDescription(booking: Booking, kind: PaymentKind): string {
   const version = booking.quoteVersion;
-  return `Deposit for booking ${bookingReference(booking.number)} (quote ${quoteReference(version.quote.number)} v${version.number})`;
+  const what = kind === 'top-up' ? 'Deposit top-up' : 'Deposit';
+  return `${what} for booking ${bookingReference(booking.number)} (quote ${quoteReference(version.quote.number)} v${version.number})`;
 }
 
 /**
@@ -95,7 +97,10 @@ export class PaymentsService {
     let attempt = payments.reduce((highest, payment) => Math.max(highest, payment.attempt), 0) + 1;
     for (let tries = 1; ; tries += 1, attempt += 1) {
       try {
-        const payment = await this.createDepositSession(booking, workshop, attempt, now);
+        const payment = await this.createSession(booking, workshop, attempt, now, {
+          kind: 'deposit',
+          amountCents: depositCents,
+        });
         em.persist(payment);
         this.keepHoldUntil(booking, payment.expiresAt);
         return { checkoutUrl: payment.checkoutUrl, expiresAt: payment.expiresAt };
@@ -106,6 +111,65 @@ export class PaymentsService {
         if (error instanceof BadGatewayException) throw error;
         throw providerFailure(error, this.logger, {
           action: 'start the deposit payment',
+          unchanged: 'Nothing was charged and the booking is unchanged.',
+        });
+      }
+    }
+  }
+
+  /**
+   * The checkout session for the difference when the booking's quote version asks a higher
+   * deposit than its payments hold (an accepted revision): the open one for that amount when
+   * there is one, otherwise a new one (payment kind `top-up`, the same idempotency-key pattern
+   * as the deposit). Only while requested or confirmed; 409 when nothing is due.
+   */
+  async topUpCheckout(
+    em: EntityManager,
+    booking: Booking,
+    workshop: Workshop,
+    now: Date,
+  ): Promise<DepositCheckout> {
+    const reference = bookingReference(booking.number);
+    if (!TOP_UP_STATES.includes(booking.state)) {
+      throw new ConflictException(
+        `Booking ${reference} is ${booking.state}: a deposit top-up is paid only while it is requested or confirmed.`,
+      );
+    }
+    const payments = booking.payments.getItems();
+    for (const payment of payments) {
+      if (payment.status === 'open' && payment.expiresAt <= now) payment.status = 'expired';
+    }
+    const dueCents = topUpDueCents({
+      state: booking.state,
+      depositCents: booking.quoteVersion.depositCents,
+      payments,
+    });
+    if (dueCents <= 0) {
+      throw new ConflictException(
+        `Nothing is due: the deposit for booking ${reference} is paid in full.`,
+      );
+    }
+    const open = payments.find((payment) => payment.kind === 'top-up' && payment.status === 'open');
+    if (open && open.amountCents === dueCents) {
+      return { checkoutUrl: open.checkoutUrl, expiresAt: open.expiresAt };
+    }
+    // A page for another amount (the deposit changed again since): closed, so it cannot be paid.
+    if (open) await this.closeSession(open, now);
+
+    let attempt = payments.reduce((highest, payment) => Math.max(highest, payment.attempt), 0) + 1;
+    for (let tries = 1; ; tries += 1, attempt += 1) {
+      try {
+        const payment = await this.createSession(booking, workshop, attempt, now, {
+          kind: 'top-up',
+          amountCents: dueCents,
+        });
+        em.persist(payment);
+        return { checkoutUrl: payment.checkoutUrl, expiresAt: payment.expiresAt };
+      } catch (error) {
+        if (isIdempotencyConflict(error) && tries < ATTEMPT_TRIES) continue;
+        if (error instanceof BadGatewayException) throw error;
+        throw providerFailure(error, this.logger, {
+          action: 'start the deposit top-up payment',
           unchanged: 'Nothing was charged and the booking is unchanged.',
         });
       }
@@ -169,11 +233,12 @@ export class PaymentsService {
 
   // ---------------------------------------------------------------------------------------
 
-  private async createDepositSession(
+  private async createSession(
     booking: Booking,
     workshop: Workshop,
     attempt: number,
     now: Date,
+    charge: { kind: PaymentKind; amountCents: number },
   ): Promise<Payment> {
     const paymentId = randomUUID();
     const version = booking.quoteVersion;
@@ -192,20 +257,21 @@ export class PaymentsService {
             quantity: 1,
             price_data: {
               currency: workshop.currency.toLowerCase(),
-              unit_amount: version.depositCents,
-              product_data: { name: depositDescription(booking) },
+              unit_amount: charge.amountCents,
+              product_data: { name: paymentDescription(booking, charge.kind) },
             },
           },
         ],
         metadata,
         payment_intent_data: { metadata },
         success_url: `${bookingUrl}/paid?session_id={CHECKOUT_SESSION_ID}`,
+        // A top-up comes back to the same two pages of the booking as the deposit.
         cancel_url: `${bookingUrl}/deposit-cancelled`,
         expires_at:
           Math.ceil(now.getTime() / 1000) + CHECKOUT_MINUTES * 60 + CHECKOUT_MARGIN_SECONDS,
         customer_email: booking.customer.email,
       },
-      { idempotencyKey: `deposit-${booking.id}-${attempt}` },
+      { idempotencyKey: `${charge.kind}-${booking.id}-${attempt}` },
     );
     if (!session.url) {
       throw new BadGatewayException(
@@ -215,9 +281,9 @@ export class PaymentsService {
     return new Payment({
       id: paymentId,
       booking,
-      kind: 'deposit',
+      kind: charge.kind,
       checkoutSessionId: session.id,
-      amountCents: session.amount_total ?? version.depositCents,
+      amountCents: session.amount_total ?? charge.amountCents,
       currency: session.currency ?? workshop.currency.toLowerCase(),
       attempt,
       checkoutUrl: session.url,

@@ -707,6 +707,40 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  '/api/quotes/{id}/revisions/preview': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Price and fit-check a revision of the quote (parts, quantities, labour per line, a workshop discount); writes nothing */
+    post: operations['QuotesController_previewRevision'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/quotes/{id}/revisions': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Save a revision as the next version, sent to the customer with the reason (the version before is superseded); the customer is e-mailed the PDF and a link to compare and answer */
+    post: operations['QuotesController_revise'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   '/api/planner/options': {
     parameters: {
       query?: never;
@@ -898,6 +932,23 @@ export interface paths {
     patch?: never;
     trace?: never;
   };
+  '/api/bookings/{id}/top-up-checkout': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** The payment page for the difference when an accepted revision raised the deposit (requested or confirmed bookings) */
+    post: operations['BookingsController_topUpCheckout'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
   '/api/bookings/{id}/advance': {
     parameters: {
       query?: never;
@@ -909,6 +960,23 @@ export interface paths {
     put?: never;
     /** The desk moves a booking on: requested → confirmed, confirmed → in-progress (vehicle in), in-progress → completed */
     post: operations['BookingsController_advance'];
+    delete?: never;
+    options?: never;
+    head?: never;
+    patch?: never;
+    trace?: never;
+  };
+  '/api/bookings/{id}/arrived': {
+    parameters: {
+      query?: never;
+      header?: never;
+      path?: never;
+      cookie?: never;
+    };
+    get?: never;
+    put?: never;
+    /** Mark the vehicle as arrived (on site) on a requested or confirmed booking */
+    post: operations['BookingsController_markArrived'];
     delete?: never;
     options?: never;
     head?: never;
@@ -2276,7 +2344,13 @@ export interface components {
     };
     /** @enum {string} */
     PricedLineKind:
-      'part' | 'service' | 'labour' | 'fitting-balancing' | 'tyre-disposal' | 'bundle-discount';
+      | 'part'
+      | 'service'
+      | 'labour'
+      | 'fitting-balancing'
+      | 'tyre-disposal'
+      | 'bundle-discount'
+      | 'workshop-discount';
     /**
      * @description part
      * @enum {string}
@@ -2333,6 +2407,8 @@ export interface components {
       tyreDisposalCents: number;
       /** @description Zero or negative */
       bundleDiscountCents: number;
+      /** @description Zero or negative: the desk's discount on a revised quote */
+      workshopDiscountCents: number;
     };
     /** @enum {string} */
     DepositBasis: 'percentage' | 'floor' | 'cap' | 'total';
@@ -2556,6 +2632,65 @@ export interface components {
       /** @description Newest first, at most 200 */
       items: components['schemas']['QuoteSummaryResponse'][];
     };
+    RevisionItemDto: {
+      /** Format: uuid */
+      productId: string;
+      /** @example 4 */
+      quantity: number;
+      /** @description Labour minutes per unit for this revision, instead of the catalogue's (it changes the labour charged and the bay time) */
+      labourMinutes?: number;
+    };
+    RevisionPreviewDto: {
+      /** Format: uuid */
+      vehicleModelId: string;
+      /**
+       * Format: uuid
+       * @description The customer's own vehicle (theirs, and of this model)
+       */
+      customerVehicleId?: string;
+      /**
+       * @description Within the model's years
+       * @example 2019
+       */
+      vehicleYear?: number;
+      uses: components['schemas']['VehicleUse'][];
+      /**
+       * @description Permanent extra load, kg (drawers, canopy, water, tools)
+       * @default 0
+       */
+      constantLoadKg: number;
+      /** @description The package's products, as when saving a quote, each with an optional labour override */
+      items: components['schemas']['RevisionItemDto'][];
+      /** @description Workshop discount, integer cents, not more than the package before it */
+      discountCents?: number;
+      reason?: string;
+    };
+    ReviseQuoteDto: {
+      /** Format: uuid */
+      vehicleModelId: string;
+      /**
+       * Format: uuid
+       * @description The customer's own vehicle (theirs, and of this model)
+       */
+      customerVehicleId?: string;
+      /**
+       * @description Within the model's years
+       * @example 2019
+       */
+      vehicleYear?: number;
+      uses: components['schemas']['VehicleUse'][];
+      /**
+       * @description Permanent extra load, kg (drawers, canopy, water, tools)
+       * @default 0
+       */
+      constantLoadKg: number;
+      /** @description The package's products, as when saving a quote, each with an optional labour override */
+      items: components['schemas']['RevisionItemDto'][];
+      /** @description Workshop discount, integer cents, not more than the package before it */
+      discountCents?: number;
+      /** @example The Trekline tyre is out of stock until March: swapped for the Ridgeback in the same size. */
+      reason: string;
+    };
     PlannerOptionsDto: {
       /** Format: uuid */
       vehicleModelId: string;
@@ -2741,12 +2876,53 @@ export interface components {
       depositCents: number;
       /** @example Oskerra Barrow GLX dual cab */
       vehicleName: string;
+      /** @description The quote's latest version (a revision may follow the booked one) */
+      latestVersionNumber: number;
+      latestVersionState: components['schemas']['QuoteVersionState'];
     };
     BookingCustomerResponse: {
       /** Format: uuid */
       id: string;
       name: string;
       email: string;
+    };
+    NeedsMoveResponse: {
+      /** @description Why the desk must move it, in plain words */
+      reason: string;
+      /** Format: date-time */
+      since: string;
+    };
+    /** @enum {string} */
+    BookingEventKind:
+      | 'held'
+      | 'deposit-paid'
+      | 'requested'
+      | 'confirmed'
+      | 'moved'
+      | 'move-requested'
+      | 'arrived'
+      | 'started'
+      | 'completed'
+      | 'cancelled'
+      | 'expired'
+      | 'top-up-paid'
+      | 're-planned'
+      | 'needs-move';
+    BookingEventActorResponse: {
+      name: string;
+      role: components['schemas']['Role'];
+    };
+    BookingEventResponse: {
+      /**
+       * Format: date-time
+       * @description UTC
+       */
+      at: string;
+      kind: components['schemas']['BookingEventKind'];
+      /** @description Null: the system (hold sweep) or the payment provider */
+      actor: components['schemas']['BookingEventActorResponse'] | null;
+      /** @example Moved from Thursday 3 December 2026, 7:30 am AEDT to … */
+      detail: string;
     };
     MoveRequestResponse: {
       note: string;
@@ -2817,7 +2993,18 @@ export interface components {
       segments: components['schemas']['PlannedSegmentResponse'][];
       quote: components['schemas']['BookingQuoteSummaryResponse'];
       customer: components['schemas']['BookingCustomerResponse'];
+      /**
+       * @description The customer's vehicle on the quote
+       * @example ABC123
+       */
+      rego: string | null;
+      /** @description Set when an accepted revision no longer fits the booked time; cleared by a successful move */
+      needsMove: components['schemas']['NeedsMoveResponse'] | null;
+      /** @description The audit trail, oldest first */
+      events: components['schemas']['BookingEventResponse'][];
       moveRequest: components['schemas']['MoveRequestResponse'] | null;
+      /** @description When the desk marked the vehicle as arrived (UTC); null until then */
+      arrivedAt: string | null;
       /** @description Checkout sessions of the booking, oldest first (open, paid, expired, failed) */
       payments: components['schemas']['BookingPaymentResponse'][];
       /**
@@ -2826,10 +3013,15 @@ export interface components {
        */
       depositDueCents: number;
       /**
-       * @description Integer cents: deposit payments received
+       * @description Integer cents: deposit payments received, top-ups included
        * @example 0
        */
       depositPaidCents: number;
+      /**
+       * @description Integer cents a top-up checkout would charge now: the version's deposit minus what the deposit and top-ups paid and still hold; 0 when none is due or the state does not allow one
+       * @example 0
+       */
+      depositTopUpCents: number;
       /**
        * @description Integer cents: given back, all payments together
        * @example 0
@@ -5372,6 +5564,125 @@ export interface operations {
       };
     };
   };
+  QuotesController_previewRevision: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['RevisionPreviewDto'];
+      };
+    };
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuotePreviewResponse'];
+        };
+      };
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  QuotesController_revise: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody: {
+      content: {
+        'application/json': components['schemas']['ReviseQuoteDto'];
+      };
+    };
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['QuoteResponse'];
+        };
+      };
+      /** @description fieldErrors; a package that does not fit is refused with fieldErrors.items */
+      400: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
   PlannerController_options: {
     parameters: {
       query?: never;
@@ -6161,6 +6472,71 @@ export interface operations {
       };
     };
   };
+  BookingsController_topUpCheckout: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      201: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['DepositCheckoutResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      404: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Nothing is due, or the booking is not requested or confirmed */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description The payment provider cannot be reached: nothing changed */
+      502: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
   BookingsController_advance: {
     parameters: {
       query?: never;
@@ -6203,6 +6579,54 @@ export interface operations {
         };
       };
       /** @description Not the state this step starts from */
+      409: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+    };
+  };
+  BookingsController_markArrived: {
+    parameters: {
+      query?: never;
+      header?: never;
+      path: {
+        id: string;
+      };
+      cookie?: never;
+    };
+    requestBody?: never;
+    responses: {
+      200: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['BookingResponse'];
+        };
+      };
+      /** @description Not signed in */
+      401: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Role not allowed */
+      403: {
+        headers: {
+          [name: string]: unknown;
+        };
+        content: {
+          'application/json': components['schemas']['ErrorResponse'];
+        };
+      };
+      /** @description Already marked in, or not requested or confirmed */
       409: {
         headers: {
           [name: string]: unknown;

@@ -4,6 +4,9 @@ import {
   BookingPaymentResponse,
   CancellationPolicyResponse,
 } from '../../payments/dto/payment.response';
+import { QUOTE_VERSION_STATES, type QuoteVersionState } from '../../quotes/quote-states';
+import { ROLES, type Role } from '../../users/user-role';
+import { BOOKING_EVENT_KINDS, type BookingEventKind } from '../booking-event-kinds';
 import { BOOKING_STATES, type BookingState } from '../booking-states';
 
 /** One stay in one bay: in UTC and in the workshop's zone. */
@@ -56,6 +59,12 @@ export class BookingQuoteSummaryResponse {
 
   @ApiProperty({ example: 'Oskerra Barrow GLX dual cab' })
   vehicleName!: string;
+
+  @ApiProperty({ description: "The quote's latest version (a revision may follow the booked one)" })
+  latestVersionNumber!: number;
+
+  @ApiProperty({ enum: QUOTE_VERSION_STATES, enumName: 'QuoteVersionState' })
+  latestVersionState!: QuoteVersionState;
 }
 
 export class BookingCustomerResponse {
@@ -67,6 +76,41 @@ export class BookingCustomerResponse {
 
   @ApiProperty()
   email!: string;
+}
+
+export class NeedsMoveResponse {
+  @ApiProperty({ description: 'Why the desk must move it, in plain words' })
+  reason!: string;
+
+  @ApiProperty({ format: 'date-time' })
+  since!: string;
+}
+
+export class BookingEventActorResponse {
+  @ApiProperty()
+  name!: string;
+
+  @ApiProperty({ enum: ROLES, enumName: 'Role' })
+  role!: Role;
+}
+
+/** One line of the booking's audit trail. */
+export class BookingEventResponse {
+  @ApiProperty({ format: 'date-time', description: 'UTC' })
+  at!: string;
+
+  @ApiProperty({ enum: BOOKING_EVENT_KINDS, enumName: 'BookingEventKind' })
+  kind!: BookingEventKind;
+
+  @ApiProperty({
+    type: BookingEventActorResponse,
+    nullable: true,
+    description: 'Null: the system (hold sweep) or the payment provider',
+  })
+  actor!: BookingEventActorResponse | null;
+
+  @ApiProperty({ example: 'Moved from Thursday 3 December 2026, 7:30 am AEDT to …' })
+  detail!: string;
 }
 
 export class MoveRequestResponse {
@@ -114,8 +158,34 @@ export class BookingResponse {
   @ApiProperty({ type: BookingCustomerResponse })
   customer!: BookingCustomerResponse;
 
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    example: 'ABC123',
+    description: "The customer's vehicle on the quote",
+  })
+  rego!: string | null;
+
+  @ApiProperty({
+    type: NeedsMoveResponse,
+    nullable: true,
+    description:
+      'Set when an accepted revision no longer fits the booked time; cleared by a successful move',
+  })
+  needsMove!: NeedsMoveResponse | null;
+
+  @ApiProperty({ type: [BookingEventResponse], description: 'The audit trail, oldest first' })
+  events!: BookingEventResponse[];
+
   @ApiProperty({ type: MoveRequestResponse, nullable: true })
   moveRequest!: MoveRequestResponse | null;
+
+  @ApiProperty({
+    type: String,
+    nullable: true,
+    description: 'When the desk marked the vehicle as arrived (UTC); null until then',
+  })
+  arrivedAt!: string | null;
 
   @ApiProperty({
     type: [BookingPaymentResponse],
@@ -126,8 +196,18 @@ export class BookingResponse {
   @ApiProperty({ example: 100000, description: "Integer cents: the quote version's deposit" })
   depositDueCents!: number;
 
-  @ApiProperty({ example: 0, description: 'Integer cents: deposit payments received' })
+  @ApiProperty({
+    example: 0,
+    description: 'Integer cents: deposit payments received, top-ups included',
+  })
   depositPaidCents!: number;
+
+  @ApiProperty({
+    example: 0,
+    description:
+      "Integer cents a top-up checkout would charge now: the version's deposit minus what the deposit and top-ups paid and still hold; 0 when none is due or the state does not allow one",
+  })
+  depositTopUpCents!: number;
 
   @ApiProperty({ example: 0, description: 'Integer cents: given back, all payments together' })
   refundedCents!: number;

@@ -5,6 +5,7 @@ import type { BayKind } from '../../catalogue/product-kinds';
 import { Payment } from '../../payments/entities/payment.entity';
 import { User } from '../../users/entities/user.entity';
 import { BOOKING_STATES, type BookingState } from '../booking-states';
+import { BookingEvent } from './booking-event.entity';
 import { Reservation } from './reservation.entity';
 
 /** The job plan a booking's time was found for, as it was then (a snapshot). */
@@ -27,6 +28,9 @@ export class Booking extends BaseEntity<
   | 'moveRequestedAt'
   | 'stateChangedAt'
   | 'calendarSequence'
+  | 'needsMoveReason'
+  | 'needsMoveSince'
+  | 'arrivedAt'
 > {
   /** Shown as B-000042; from a sequence. */
   @Property({ type: 'integer', autoincrement: true, unique: true })
@@ -80,6 +84,20 @@ export class Booking extends BaseEntity<
   @Property({ type: 'integer', default: 0 })
   calendarSequence = 0;
 
+  /**
+   * Set when an accepted revision of the quote needs bay time that no longer fits the booked
+   * start: the desk must move it. A successful move clears both.
+   */
+  @Property({ type: 'text', nullable: true })
+  needsMoveReason: string | null = null;
+
+  @Property({ type: 'datetime', columnType: 'timestamptz', nullable: true })
+  needsMoveSince: Date | null = null;
+
+  /** When the desk marked the vehicle as arrived (on site, keys in), before or as work starts. */
+  @Property({ type: 'datetime', columnType: 'timestamptz', nullable: true })
+  arrivedAt: Date | null = null;
+
   @OneToMany(() => Reservation, (reservation) => reservation.booking, {
     orderBy: { startsAt: 'asc' },
   })
@@ -88,6 +106,12 @@ export class Booking extends BaseEntity<
   /** Checkout sessions of the booking (deposit and top-ups), in order of attempt. */
   @OneToMany(() => Payment, (payment) => payment.booking, { orderBy: { attempt: 'asc' } })
   payments = new Collection<Payment>(this);
+
+  /** The audit trail, oldest first. */
+  @OneToMany(() => BookingEvent, (event) => event.booking, {
+    orderBy: { at: 'asc', number: 'asc' },
+  })
+  events = new Collection<BookingEvent>(this);
 
   constructor(fields: {
     customer: User;

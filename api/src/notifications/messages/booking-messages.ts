@@ -1,3 +1,4 @@
+import { DateTime } from 'luxon';
 import { bookingCalendar } from './booking-calendar';
 import {
   type CustomerMessage,
@@ -102,6 +103,32 @@ export function bookingMovedMessage(
     closing: [CHANGE(input)],
     workshop: input.workshop,
     attachments: input.withCalendar ? [calendarFor(input, 'REQUEST')] : [],
+  });
+}
+
+/**
+ * The day before a confirmed booking: when and where, what to bring, and the cautions of the
+ * work (the fitment is checked by a licensed technician; wheel nuts are re-checked after the
+ * first drive).
+ */
+export function bookingReminderMessage(input: BookingMessageInput): CustomerMessage {
+  const start = DateTime.fromJSDate(input.startsAt, { zone: input.timeZone })
+    .setLocale('en-AU')
+    .toFormat('h:mm a');
+  return layoutMessage({
+    subject: `Reminder: booking ${input.bookingReference} tomorrow at ${start}`,
+    customerName: input.customer.name,
+    lead: [
+      `A reminder that your ${input.vehicleName} is booked in at ${input.workshop.name} tomorrow, ${workshopDateTime(input.startsAt, input.timeZone)}. Please bring it to ${input.workshop.addressLine}, ${input.workshop.town} a few minutes before the start.`,
+      'Bring the key or adaptor for any locking wheel nuts, and take valuables and loose loads out of the vehicle.',
+    ],
+    facts: facts(input),
+    closing: [
+      'Fitment is checked again by a licensed technician before any work; local vehicle codes apply.',
+      'After new wheels or tyres are fitted, have the wheel nuts re-checked to the maker’s torque after the first 50–100 km.',
+      CHANGE(input),
+    ],
+    workshop: input.workshop,
   });
 }
 

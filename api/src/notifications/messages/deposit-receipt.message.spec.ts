@@ -60,4 +60,21 @@ describe('depositReceiptMail', () => {
     expect(mail.text).toMatch(/^Refunded: +\$1,000\.00 AUD$/m);
     expect(mail.text).not.toContain('Balance due');
   });
+
+  it('words a top-up as a top-up, with the balance after it', () => {
+    const mail = depositReceiptMail({
+      ...INPUT,
+      kind: 'top-up',
+      amountPaidCents: 30000,
+      balanceDueCents: 382345,
+    });
+    expect(mail.subject).toBe('Receipt: deposit top-up for booking B-000042');
+    for (const part of [mail.text, mail.html]) {
+      expect(part).toContain('deposit top-up of $300.00 AUD');
+      expect(part).toContain('$3,823.45 AUD');
+    }
+    const refunded = depositReceiptMail({ ...INPUT, kind: 'top-up', refundedInFullCents: 30000 });
+    expect(refunded.subject).toBe('Your payment for booking B-000042 has been refunded');
+    expect(refunded.text).toContain('deposit top-up');
+  });
 });

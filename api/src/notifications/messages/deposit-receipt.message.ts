@@ -19,6 +19,8 @@ export interface DepositReceiptMailInput {
   amountPaidCents: number;
   paidAt: Date;
   balanceDueCents: number;
+  /** A deposit (the default) or a top-up of it after a revised quote was accepted. */
+  kind?: 'deposit' | 'top-up';
   /**
    * Set when the payment reached the workshop after the held time had been let go (cancelled or
    * run out): it was refunded in full at once and the booking stays as it is.
@@ -33,9 +35,11 @@ export interface DepositReceiptMailInput {
  */
 export function depositReceiptMail(input: DepositReceiptMailInput): CustomerMessage {
   const refunded = input.refundedInFullCents !== undefined;
+  const topUp = input.kind === 'top-up';
+  const what = topUp ? 'deposit top-up' : 'deposit';
   const subject = refunded
     ? `Your payment for booking ${input.bookingReference} has been refunded`
-    : `Receipt: deposit for booking ${input.bookingReference}`;
+    : `Receipt: ${what} for booking ${input.bookingReference}`;
   const start = workshopDateTime(input.startsAt, input.timeZone);
   const paid = amount(input.amountPaidCents, input.currency);
   const paidOn = workshopDateTime(input.paidAt, input.timeZone);
@@ -51,8 +55,12 @@ export function depositReceiptMail(input: DepositReceiptMailInput): CustomerMess
       : ['Balance due', amount(input.balanceDueCents, input.currency)],
   ];
   const lead = refunded
-    ? `Your payment of ${paid} reached us after the time held for booking ${input.bookingReference} had been released, so the booking could not go ahead. We have refunded the whole amount to your card; it can take a few business days to show on your statement.`
-    : `Thank you: we have received your deposit of ${paid} for booking ${input.bookingReference}. The workshop will confirm the booking with you.`;
+    ? topUp
+      ? `Your deposit top-up of ${paid} for booking ${input.bookingReference} was not needed (the booking is no longer going ahead, or its deposit was already paid in full). We have refunded the whole amount to your card; it can take a few business days to show on your statement.`
+      : `Your payment of ${paid} reached us after the time held for booking ${input.bookingReference} had been released, so the booking could not go ahead. We have refunded the whole amount to your card; it can take a few business days to show on your statement.`
+    : topUp
+      ? `Thank you: we have received your deposit top-up of ${paid} for booking ${input.bookingReference}, for the revised quote you accepted. The booking's time is unchanged.`
+      : `Thank you: we have received your deposit of ${paid} for booking ${input.bookingReference}. The workshop will confirm the booking with you.`;
   const card = [
     input.workshop.name,
     input.workshop.addressLine,
