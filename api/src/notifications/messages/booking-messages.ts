@@ -1,3 +1,4 @@
+import { longDate } from '../../workshop/workshop-time';
 import { DateTime } from 'luxon';
 import { bookingCalendar } from './booking-calendar';
 import {
@@ -210,7 +211,7 @@ export function quoteSavedMessage(input: QuoteSavedInput): CustomerMessage {
       ['Vehicle', input.vehicleName],
       ['Total', amount(input.totalCents, input.currency)],
       ['Deposit to book', amount(input.depositCents, input.currency)],
-      ['Price valid until', input.validUntilDate],
+      ['Price valid until', longDate(input.validUntilDate)],
     ],
     closing: [
       'Fitment is checked again by a licensed technician before any work; local vehicle codes apply.',

@@ -1,3 +1,4 @@
+import { longDate } from '../../workshop/workshop-time';
 import type { MailAttachment } from '../../mail/templates/mail-content';
 import { type CustomerMessage, type WorkshopCard, amount, layoutMessage } from './customer-message';
 
@@ -55,7 +56,7 @@ export function revisedQuoteMessage(input: RevisedQuoteInput): CustomerMessage {
       ['Vehicle', input.vehicleName],
       ['New total', change(input.totalCents, input.previousTotalCents, input.currency)],
       ['Deposit', change(input.depositCents, input.previousDepositCents, input.currency)],
-      ['Price valid until', input.validUntilDate],
+      ['Price valid until', longDate(input.validUntilDate)],
       ...(input.bookingLine ? ([['Booking', input.bookingLine]] as [string, string][]) : []),
     ],
     closing: [
