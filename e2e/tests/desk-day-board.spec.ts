@@ -24,6 +24,7 @@ interface Booking {
   startUtc: string;
   timeZone: string;
   customer: { name: string; email: string };
+  arrivedAt: string | null;
   quote: { id: string; reference: string; versionId: string; vehicleName: string };
   segments: { bayName: string }[];
 }
@@ -109,12 +110,27 @@ async function newRequestedBooking(page: Page): Promise<Booking> {
 }
 
 describe('the front desk confirms a request and moves it on the day board', () => {
-  it('filters the requests, confirms, moves to another day and finds it on the board (desktop)', async () => {
+  it('finds the customer’s request to move, confirms, moves it to another day, and both sides see the move (desktop)', async () => {
     const customerSide = await newPage(currentBrowser(), 'desktop');
     const { context, page } = await newPage(currentBrowser(), 'desktop');
     try {
       const requested = await newRequestedBooking(customerSide.page);
       const { reference, timeZone } = requested;
+
+      // 0. The customer asks to move it, from their booking page.
+      const asked = 'Could it be another day, first thing?';
+      await customerSide.page.goto(`/account/bookings/${requested.id}`);
+      await customerSide.page.getByRole('button', { name: 'Ask to move' }).click();
+      const askDialog = customerSide.page.getByRole('dialog', {
+        name: `Ask to move booking ${reference}`,
+      });
+      await askDialog.getByLabel('When would suit you better?').fill(asked);
+      await askDialog.getByRole('button', { name: 'Send the request' }).click();
+      await expect
+        .poll(() =>
+          customerSide.page.getByText('Waiting for the workshop', { exact: false }).isVisible(),
+        )
+        .toBe(true);
 
       // 1. Requests: waiting for confirmation, searched by the customer's e-mail.
       await signIn(page, demoUsers.desk);
@@ -133,6 +149,15 @@ describe('the front desk confirms a request and moves it on the day board', () =
       expect(rowText).toContain(requested.quote.reference);
       expect(rowText).toContain(requested.customer.name);
       await record(page, 'requests');
+      // The same booking is among those the customer asked to move, flagged in its row.
+      await page.getByRole('button', { name: /^Move requested/ }).click();
+      await expect.poll(() => link.isVisible()).toBe(true);
+      expect(await grid.getByRole('row').nth(1).textContent()).toContain('Move requested');
+      // Searching by the quote's number alone finds it too.
+      await page
+        .getByLabel('Search bookings')
+        .fill(String(Number(requested.quote.reference.slice(2))));
+      await expect.poll(() => link.isVisible()).toBe(true);
 
       // 2. The booking: state, customer, quote; Confirm.
       await link.click();
@@ -150,6 +175,13 @@ describe('the front desk confirms a request and moves it on the day board', () =
           .getByRole('link', { name: new RegExp(`^${requested.quote.reference}, version`) })
           .getAttribute('href'),
       ).toBe(`/desk/quotes/${requested.quote.id}`);
+      const needsDesk = page.getByRole('region', { name: 'Needs the desk' });
+      expect(await needsDesk.textContent()).toContain(asked);
+      // The audit trail has the hold, the deposit and the customer's request, in that order.
+      const trail = page.getByRole('region', { name: 'Audit trail', exact: true });
+      const trailText = (await trail.textContent()) ?? '';
+      expect(trailText.indexOf('Time held')).toBeGreaterThanOrEqual(0);
+      expect(trailText.indexOf('Move requested')).toBeGreaterThan(trailText.indexOf('Time held'));
       await record(page, 'booking-detail');
       await status.getByRole('button', { name: 'Confirm', exact: true }).click();
       await expect
@@ -191,6 +223,30 @@ describe('the front desk confirms a request and moves it on the day board', () =
       const moved = await readBooking(page, requested.id);
       expect(moved.startUtc).toBe(newStart.startUtc);
       expect(moved.state).toBe('confirmed');
+      // The trail says what was moved where; the request is answered (no longer waiting).
+      await expect
+        .poll(
+          async () =>
+            (await page.getByRole('region', { name: 'Audit trail', exact: true }).textContent()) ??
+            '',
+        )
+        .toMatch(/Moved from .+ to /);
+      await expect
+        .poll(async () => (await needsDesk.textContent()) ?? '')
+        .not.toContain('The customer asks to move it');
+
+      // The customer sees the confirmation and the move, and that their request was answered.
+      await customerSide.page.goto(`/account/bookings/${requested.id}`);
+      const moves = customerSide.page.getByRole('region', { name: 'Moves' });
+      await expect.poll(() => moves.isVisible()).toBe(true);
+      expect(await moves.textContent()).toMatch(/Moved from .+ to /);
+      expect(
+        await customerSide.page.getByText('Your request to move was answered').isVisible(),
+      ).toBe(true);
+      expect(await customerSide.page.getByText(/^Confirmed by the workshop on /).isVisible()).toBe(
+        true,
+      );
+      await record(customerSide.page, 'customer-booking');
 
       // 4. The day board on the new day: the block in its bay, and it opens the booking.
       await page.getByRole('link', { name: 'This day on the board' }).click();
@@ -201,6 +257,25 @@ describe('the front desk confirms a request and moves it on the day board', () =
       const blockName = (await block.first().getAttribute('aria-label')) ?? '';
       expect(blockName).toContain(requested.customer.name);
       expect(blockName).toContain(requested.quote.reference);
+      // Blocks sit in their bay's column by their times: none overlaps another in its bay, and
+      // the booking's own blocks are at least a line of text tall.
+      const boxes = (
+        await Promise.all(
+          (await board.getByRole('link', { name: /^B-\d+, / }).all()).map((each) =>
+            each.boundingBox(),
+          ),
+        )
+      ).filter((box): box is NonNullable<typeof box> => box !== null);
+      for (const a of boxes) {
+        for (const b of boxes) {
+          if (a === b || Math.abs(a.x - b.x) > 1) continue;
+          const overlap = Math.min(a.y + a.height, b.y + b.height) - Math.max(a.y, b.y);
+          expect(overlap, 'two blocks in one bay overlap').toBeLessThanOrEqual(0);
+        }
+      }
+      for (const own of await block.all()) {
+        expect((await own.boundingBox())?.height ?? 0).toBeGreaterThanOrEqual(18);
+      }
       await record(page, 'day-board');
 
       // 5. The week: the day lists the booking with its start time and bays.
@@ -220,6 +295,21 @@ describe('the front desk confirms a request and moves it on the day board', () =
       await expect.poll(() => block.first().isVisible()).toBe(true);
       await block.first().click();
       await page.waitForURL(new RegExp(`/desk/bookings/${requested.id}$`));
+
+      // 6. The vehicle comes in: marked arrived, the trail says so, and the next step is work.
+      const statusAgain = page.getByRole('region', { name: 'Status', exact: true });
+      await statusAgain.getByRole('button', { name: 'Mark arrived' }).click();
+      await expect
+        .poll(() => statusAgain.getByText(/^Vehicle in since /).isVisible(), { timeout: 15_000 })
+        .toBe(true);
+      expect(
+        await statusAgain.getByRole('button', { name: 'Start work', exact: true }).count(),
+      ).toBe(1);
+      expect(await statusAgain.getByRole('button', { name: 'Mark arrived' }).count()).toBe(0);
+      expect((await readBooking(page, requested.id)).arrivedAt).not.toBeNull();
+      expect(
+        await page.getByRole('region', { name: 'Audit trail', exact: true }).textContent(),
+      ).toContain('Vehicle arrived');
     } finally {
       await context.close();
       await customerSide.context.close();

@@ -151,6 +151,12 @@ export type QuoteLine = Schemas['QuoteLineResponse'];
 export type QuotePhoto = Schemas['QuotePhotoResponse'];
 export type QuoteVersion = Schemas['QuoteVersionResponse'];
 export type Quote = Schemas['QuoteResponse'];
+/** One product of a revision, with the desk's per-unit labour minutes when they differ. */
+export type RevisionItem = Schemas['RevisionItemDto'];
+/** POST /api/quotes/:id/revisions (desk): the quote's next version, with the reason. */
+export type ReviseQuoteRequest = Schemas['ReviseQuoteDto'];
+/** POST /api/quotes/:id/revisions/preview: the same, the reason optional. */
+export type RevisionPreviewRequest = Schemas['RevisionPreviewDto'];
 
 /** GET /api/quotes query string (staff). */
 export interface QuoteQuery {
@@ -180,6 +186,11 @@ export type AvailabilityDay = Schemas['AvailabilityDayResponse'];
 export type Availability = Schemas['AvailabilityResponse'];
 export type BookingQuoteSummary = Schemas['BookingQuoteSummaryResponse'];
 export type BookingMoveRequest = Schemas['MoveRequestResponse'];
+/** Set when an accepted revision no longer fits the booked time: why, and since when. */
+export type BookingNeedsMove = Schemas['NeedsMoveResponse'];
+export type BookingEventKind = Schemas['BookingEventKind'];
+/** One line of a booking's audit trail (UTC time, who, what). */
+export type BookingEvent = Schemas['BookingEventResponse'];
 export type Booking = Schemas['BookingResponse'];
 export type BookingListResponse = Schemas['BookingListResponse'];
 /** 409 from creating or moving a booking: why, and the next starts that are free. */

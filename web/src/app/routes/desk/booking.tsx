@@ -12,6 +12,7 @@ import { warmSession } from '@/app/warm-session';
 import { bookingQueryOptions } from '@/features/bookings/api/get-booking';
 import { DeskBookingDetail } from '@/features/bookings/components/desk-booking-detail';
 import { localDateOf } from '@/features/bookings/utils/booking-text';
+import { quoteQueryOptions } from '@/features/quotes/api/get-quote';
 import { isApiError } from '@/lib/api-client';
 
 export const clientLoader =
@@ -37,10 +38,16 @@ function BackLinks({ date }: { date?: string }) {
   );
 }
 
-/** One booking for the front desk: its next step, move and cancel, and everything on it. */
+/**
+ * One booking for the front desk: its next step, move and cancel, and everything on it; the
+ * quote (fit report, photos) is read from the quotes feature and shares its cache.
+ */
 export default function DeskBookingRoute() {
   const { bookingId = '' } = useParams();
   const booking = useQuery(bookingQueryOptions(bookingId));
+  // The booking's quote (fit report, photos): read once the booking names it.
+  const quoteId = booking.data?.quote.id ?? '';
+  const quote = useQuery({ ...quoteQueryOptions(quoteId), enabled: quoteId !== '' });
   if (booking.isPending) return <LoadingScreen label="Loading the booking" />;
   if (booking.isError) {
     const missing = isApiError(booking.error) && booking.error.statusCode === 404;
@@ -76,7 +83,17 @@ export default function DeskBookingRoute() {
         title={`Booking ${data.reference}`}
         lead={<BackLinks date={localDateOf(data.startUtc, data.timeZone)} />}
       />
-      <DeskBookingDetail booking={data} quoteHref={paths.desk.quote.getHref(data.quote.id)} />
+      <DeskBookingDetail
+        booking={data}
+        quoteHref={paths.desk.quote.getHref(data.quote.id)}
+        reviseHref={paths.desk.revise.getHref(data.quote.id)}
+        quoteLoad={{
+          quote: quote.data,
+          loading: quote.isPending,
+          failed: quote.isError,
+          retry: () => void quote.refetch(),
+        }}
+      />
     </>
   );
 }

@@ -4,7 +4,9 @@ import CardActionArea from '@mui/material/CardActionArea';
 import CardContent from '@mui/material/CardContent';
 import Typography from '@mui/material/Typography';
 import { Link as RouterLink } from 'react-router';
+import { formatCents } from '@/lib/money';
 import type { Booking } from '@/types/api';
+import { confirmedAt, customerBookingNotes } from '../utils/booking-history';
 import { formatLocalDateTime } from '../utils/booking-text';
 import { BookingStateChip } from './booking-state-chip';
 
@@ -14,7 +16,13 @@ interface Props {
   'aria-label': string;
 }
 
-/** Bookings as cards, newest first: reference, state, start on the workshop's clock, vehicle. */
+const noteColours = { action: 'warning.dark', info: 'info.dark', done: 'text.secondary' } as const;
+
+/**
+ * Bookings as cards, newest first: reference, state, start on the workshop's clock (with the
+ * confirmation), vehicle, and what changed or waits for the customer (a revised quote to
+ * answer, a deposit difference, the request to move, the last move).
+ */
 export function BookingList({ bookings, hrefFor, ...aria }: Props) {
   return (
     <Box
@@ -50,6 +58,11 @@ export function BookingList({ bookings, hrefFor, ...aria }: Props) {
                 <Typography sx={{ mt: 0.5, fontWeight: 500 }}>
                   {formatLocalDateTime(booking.startUtc, booking.timeZone)}
                 </Typography>
+                {booking.state === 'confirmed' && confirmedAt(booking) && (
+                  <Typography variant="body2" color="success.main">
+                    Confirmed by the workshop
+                  </Typography>
+                )}
                 <Typography>{booking.quote.vehicleName}</Typography>
                 <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
                   Quote {booking.quote.reference}
@@ -57,6 +70,19 @@ export function BookingList({ bookings, hrefFor, ...aria }: Props) {
                     ? `, version ${booking.quote.versionNumber}`
                     : ''}
                 </Typography>
+                {customerBookingNotes(booking, formatCents).map((note) => (
+                  <Typography
+                    key={note.text}
+                    variant="body2"
+                    sx={{
+                      mt: 0.5,
+                      color: noteColours[note.tone],
+                      fontWeight: note.tone === 'action' ? 500 : 400,
+                    }}
+                  >
+                    {note.text}
+                  </Typography>
+                ))}
               </CardContent>
             </CardActionArea>
           </Card>

@@ -18,6 +18,8 @@ import type { Booking, BookingState } from '@/types/api';
 import { bookingsQueryOptions } from '../api/get-bookings';
 import {
   filterBookings,
+  moveRequested,
+  needsMove,
   quickFilterLabels,
   type BookingQuickFilter,
 } from '../utils/booking-filters';
@@ -33,7 +35,14 @@ interface Props {
   hrefFor: (booking: Booking) => string;
 }
 
-const quickFilters: BookingQuickFilter[] = ['waiting', 'today', 'this-week', 'all'];
+const quickFilters: BookingQuickFilter[] = [
+  'waiting',
+  'move-requested',
+  'needs-move',
+  'today',
+  'this-week',
+  'all',
+];
 const states = Object.keys(bookingStateLabels) as BookingState[];
 
 /** "Thu 3 Dec 7:30 am" on the workshop's clock. */
@@ -60,11 +69,27 @@ function columnsFor(
     {
       field: 'state',
       headerName: 'State',
-      width: 120,
+      width: 130,
       type: 'singleSelect',
       valueOptions: states.map((state) => ({ value: state, label: bookingStateLabels[state] })),
+      // The state, and under it what needs the desk: a move the revised quote forces, or the
+      // customer's request to move.
       renderCell: ({ row }: GridRenderCellParams<Booking>) => (
-        <BookingStateChip state={row.state} />
+        <Box
+          sx={{
+            display: 'flex',
+            flexDirection: 'column',
+            alignItems: 'flex-start',
+            gap: 0.5,
+            py: 0.75,
+          }}
+        >
+          <BookingStateChip state={row.state} />
+          {needsMove(row) && <Chip size="small" color="error" label="Needs a move" />}
+          {moveRequested(row) && (
+            <Chip size="small" color="warning" variant="outlined" label="Move requested" />
+          )}
+        </Box>
       ),
     },
     {
@@ -99,6 +124,12 @@ function columnsFor(
       ),
     },
     {
+      field: 'rego',
+      headerName: 'Rego',
+      width: 96,
+      valueGetter: (_value, row) => row.rego ?? '',
+    },
+    {
       field: 'quote',
       headerName: 'Quote',
       width: 96,
@@ -111,19 +142,13 @@ function columnsFor(
       width: 108,
       valueFormatter: (value: number) => (value > 0 ? formatCents(value) : 'Not paid'),
     },
-    {
-      field: 'moveRequest',
-      headerName: 'Move asked',
-      description: 'The customer asked to move it',
-      width: 100,
-      valueGetter: (_value, row) => (row.moveRequest ? 'Yes' : ''),
-    },
   ];
 }
 
 /**
- * Every booking as a table: quick views (waiting for confirmation, today, this week), a state,
- * and a search by customer, quote or booking reference. A row opens the booking.
+ * Every booking as a table: quick views (waiting for confirmation, move requested, needs a
+ * move, today, this week), a state, and a search by customer, rego, quote or booking reference.
+ * A row opens the booking.
  */
 export function BookingRequestsGrid({ label, timeZone, hrefFor }: Props) {
   const navigate = useNavigate();
@@ -137,7 +162,12 @@ export function BookingRequestsGrid({ label, timeZone, hrefFor }: Props) {
     () => filterBookings(bookings.data?.items ?? [], { quick, state, search, today, timeZone }),
     [bookings.data, quick, state, search, today, timeZone],
   );
-  const waiting = (bookings.data?.items ?? []).filter((b) => b.state === 'requested').length;
+  const items = bookings.data?.items ?? [];
+  const counts: Partial<Record<BookingQuickFilter, number>> = {
+    waiting: items.filter((b) => b.state === 'requested').length,
+    'move-requested': items.filter(moveRequested).length,
+    'needs-move': items.filter(needsMove).length,
+  };
 
   return (
     <Box>
@@ -145,13 +175,12 @@ export function BookingRequestsGrid({ label, timeZone, hrefFor }: Props) {
         <Box role="group" aria-label="Show" sx={{ display: 'flex', flexWrap: 'wrap', gap: 0.75 }}>
           {quickFilters.map((option) => {
             const selected = quick === option;
+            const count = counts[option] ?? 0;
             return (
               <Chip
                 key={option}
                 label={
-                  option === 'waiting' && waiting > 0
-                    ? `${quickFilterLabels[option]} (${waiting})`
-                    : quickFilterLabels[option]
+                  count > 0 ? `${quickFilterLabels[option]} (${count})` : quickFilterLabels[option]
                 }
                 clickable
                 color={selected ? 'primary' : 'default'}
@@ -181,7 +210,7 @@ export function BookingRequestsGrid({ label, timeZone, hrefFor }: Props) {
         <TextField
           type="search"
           label="Search bookings"
-          placeholder="Name, e-mail, Q-000123, B-000042"
+          placeholder="Name, e-mail, rego, Q-000123, B-000042"
           value={search}
           onChange={(event) => setSearch(event.target.value)}
           margin="none"

@@ -15,18 +15,20 @@ import { formatCents } from '@/lib/money';
 import { bookingQueryKey, bookingQueryOptions } from '../api/get-booking';
 import { useNow } from '../hooks/use-now';
 import { bookingStateLabels, formatLocalDateTime } from '../utils/booking-text';
-import { paymentCheckPhase } from '../utils/payment-text';
+import { latestPaidPayment, paymentCheckPhase, topUpDue } from '../utils/payment-text';
 import { BookingLoadError } from './booking-load-error';
 import { BookingStateChip } from './booking-state-chip';
 import { CancelBookingDialog } from './cancel-booking-dialog';
 import { HoldCountdown } from './hold-countdown';
 import { PayDeposit } from './pay-deposit';
+import { PayTopUp } from './pay-top-up';
 import { PaymentsSummary } from './payments-summary';
 
 /**
  * Where the provider sends a customer who left its page without paying: the booking as the
  * API has it, and while the time is still held, "Try again" (a payment page again) or
- * "Release this time" (the cancel dialog, as on the booking).
+ * "Release this time" (the cancel dialog, as on the booking). After leaving the page for a
+ * deposit top-up, the difference still due and "Try again"; the booking keeps its time.
  */
 export function DepositNotCompleted({ bookingId }: { bookingId: string }) {
   const queryClient = useQueryClient();
@@ -43,8 +45,11 @@ export function DepositNotCompleted({ bookingId }: { bookingId: string }) {
   }
   const held = data.state === 'held';
   const holdOver = held && data.holdExpiresAt !== null && Date.parse(data.holdExpiresAt) <= now;
+  // Left the page for the difference a revised quote asks (a top-up): still due, time kept.
+  const topUpLeft = topUpDue(data);
   // Paid after all (in another tab, or the page reported late): the booking says so.
-  const paid = paymentCheckPhase(data, true) === 'received';
+  const paid = !topUpLeft && paymentCheckPhase(data, true) === 'received';
+  const lastPaid = latestPaidPayment(data.payments);
 
   return (
     <>
@@ -52,9 +57,17 @@ export function DepositNotCompleted({ bookingId }: { bookingId: string }) {
       <Box sx={{ display: 'grid', gap: 3, maxWidth: 720 }}>
         {paid ? (
           <Alert severity="success" role="status">
-            The deposit of {formatCents(data.depositPaidCents)} for booking {data.reference} is paid
-            after all. The booking is {bookingStateLabels[data.state].toLowerCase()}.
+            {lastPaid?.kind === 'top-up'
+              ? `The deposit top-up of ${formatCents(lastPaid.amountCents)} for booking ${data.reference} is paid after all.`
+              : `The deposit of ${formatCents(data.depositPaidCents)} for booking ${data.reference} is paid after all.`}{' '}
+            The booking is {bookingStateLabels[data.state].toLowerCase()}.
           </Alert>
+        ) : topUpLeft ? (
+          <Typography>
+            The difference of {formatCents(data.depositTopUpCents)} on the deposit of booking{' '}
+            {data.reference} has not been paid. The booking keeps its time; you can pay it now or
+            from the booking later.
+          </Typography>
         ) : held && !holdOver ? (
           <Typography>
             The deposit for booking {data.reference} has not been paid. Your time is still held: try
@@ -86,6 +99,7 @@ export function DepositNotCompleted({ bookingId }: { bookingId: string }) {
               />
             )}
             <PaymentsSummary booking={data} />
+            {topUpLeft && <PayTopUp booking={data} label="Try again" />}
             {held && !holdOver && (
               <Box sx={{ display: 'grid', gap: 1.5, mt: 1 }}>
                 <PayDeposit booking={data} label="Try again" />
@@ -112,7 +126,7 @@ export function DepositNotCompleted({ bookingId }: { bookingId: string }) {
           >
             See the booking
           </Button>
-          {!paid && (!held || holdOver) && (
+          {!paid && !topUpLeft && (!held || holdOver) && (
             <Button
               component={RouterLink}
               to={paths.plan.book.getHref(data.quote.id)}

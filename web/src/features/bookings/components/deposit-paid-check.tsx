@@ -18,11 +18,12 @@ import { bookingQueryKey } from '../api/get-booking';
 import { useNow } from '../hooks/use-now';
 import { usePaymentCheck } from '../hooks/use-payment-check';
 import { bookingStateLabels, formatLocalDateTime } from '../utils/booking-text';
-import type { PaymentCheckPhase } from '../utils/payment-text';
+import { latestPaidPayment, type PaymentCheckPhase } from '../utils/payment-text';
 import { BookingLoadError } from './booking-load-error';
 import { BookingStateChip } from './booking-state-chip';
 import { HoldCountdown } from './hold-countdown';
 import { PayDeposit } from './pay-deposit';
+import { PayTopUp } from './pay-top-up';
 import { PaymentsSummary } from './payments-summary';
 
 const titles: Record<PaymentCheckPhase, string> = {
@@ -50,6 +51,20 @@ function PaymentsCard({ booking }: { booking: Booking }) {
         <PaymentsSummary booking={booking} />
       </CardContent>
     </Card>
+  );
+}
+
+/** Past `held`, the difference a revised quote asks (a top-up) was not paid: try again. */
+function TopUpNotComplete({ booking }: { booking: Booking }) {
+  return (
+    <Box sx={{ display: 'grid', gap: 2 }}>
+      <Alert severity="error" role="status">
+        The payment of the difference did not go through, so{' '}
+        {formatCents(booking.depositTopUpCents)} is still due on the deposit of booking{' '}
+        {booking.reference}. The booking keeps its time.
+      </Alert>
+      <PayTopUp booking={booking} label="Try again" />
+    </Box>
   );
 }
 
@@ -81,8 +96,22 @@ function PhaseMessage({
   onRetry: () => void;
   onHoldExpired: () => void;
 }) {
+  const lastPaid = latestPaidPayment(booking.payments);
   switch (phase) {
     case 'received':
+      if (lastPaid?.kind === 'top-up') {
+        return (
+          <Alert severity="success" role="status">
+            <AlertTitle>
+              Deposit top-up of {formatCents(lastPaid.amountCents)} received for booking{' '}
+              {booking.reference}
+            </AlertTitle>
+            The deposit paid is now {formatCents(booking.depositPaidCents)}; the booking is{' '}
+            {bookingStateLabels[booking.state].toLowerCase()}. A receipt is on its way to{' '}
+            {booking.customer.email}.
+          </Alert>
+        );
+      }
       return (
         <Alert severity="success" role="status">
           <AlertTitle>
@@ -116,12 +145,19 @@ function PhaseMessage({
           }
         >
           <AlertTitle>We have not heard from the payment provider yet</AlertTitle>
-          If you paid, there is no need to pay again: the deposit shows on the booking as soon as
-          the provider tells us. Your time stays held meanwhile.
+          If you paid, there is no need to pay again: the payment shows on the booking as soon as
+          the provider tells us.{' '}
+          {booking.state === 'held'
+            ? 'Your time stays held meanwhile.'
+            : 'Your booking keeps its time meanwhile.'}
         </Alert>
       );
     case 'not-complete':
-      return <NotComplete booking={booking} onHoldExpired={onHoldExpired} />;
+      return booking.state === 'held' ? (
+        <NotComplete booking={booking} onHoldExpired={onHoldExpired} />
+      ) : (
+        <TopUpNotComplete booking={booking} />
+      );
     case 'ended':
       return (
         <Alert severity="info" role="status">
@@ -133,9 +169,10 @@ function PhaseMessage({
 }
 
 /**
- * Where the provider sends the customer after paying. The booking is read from the API until
- * it has moved on from `held` ("Payment received"), or the wait is over ("not heard yet", with
- * a retry), or the latest payment failed (try again while the time is held).
+ * Where the provider sends the customer after paying (the deposit, or a top-up of it). The
+ * booking is read from the API until it has moved on from `held` with no top-up page open
+ * ("Payment received"), or the wait is over ("not heard yet", with a retry), or the latest
+ * payment failed (try again while the time is held, or pay the difference again).
  */
 export function DepositPaidCheck({ bookingId }: { bookingId: string }) {
   const queryClient = useQueryClient();

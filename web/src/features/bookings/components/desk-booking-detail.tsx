@@ -4,6 +4,7 @@ import Box from '@mui/material/Box';
 import Button from '@mui/material/Button';
 import Card from '@mui/material/Card';
 import CardContent from '@mui/material/CardContent';
+import Chip from '@mui/material/Chip';
 import CircularProgress from '@mui/material/CircularProgress';
 import Link from '@mui/material/Link';
 import Typography from '@mui/material/Typography';
@@ -12,23 +13,35 @@ import EditCalendarOutlined from '@mui/icons-material/EditCalendarOutlined';
 import EventAvailableOutlined from '@mui/icons-material/EventAvailableOutlined';
 import EventBusyOutlined from '@mui/icons-material/EventBusyOutlined';
 import HandymanOutlined from '@mui/icons-material/HandymanOutlined';
+import LocalShippingOutlined from '@mui/icons-material/LocalShippingOutlined';
+import RateReviewOutlined from '@mui/icons-material/RateReviewOutlined';
 import { useId, useState, type ReactNode } from 'react';
+import { Link as RouterLink } from 'react-router';
 import { isApiError } from '@/lib/api-client';
 import type { AdvanceBookingRequest, Booking, BookingState } from '@/types/api';
 import { useAdvanceBooking } from '../api/advance-booking';
-import { bookingStateLabels, formatLocalDateTime, formatLocalTime } from '../utils/booking-text';
+import { useMarkArrived } from '../api/mark-arrived';
+import { formatEventTime, moveRequestStatus, newerQuoteVersion } from '../utils/booking-history';
+import { bookingStateLabels, formatLocalTime } from '../utils/booking-text';
+import { BookingAuditTrail } from './booking-audit-trail';
+import { BookedFitReport, QuotePhotos, type QuoteLoad } from './booking-quote-facts';
 import { BookingStateChip } from './booking-state-chip';
 import { CancelBookingDialog } from './cancel-booking-dialog';
 import { BookingQuoteRows } from './booking-quote-rows';
 import { DetailList, DetailRow } from './detail-list';
+import { PaymentLines } from './payment-lines';
 import { PaymentsSummary } from './payments-summary';
 import { PickAnotherTimeDialog } from './pick-another-time-dialog';
 import { StartDetails } from './start-details';
 
 interface Props {
   booking: Booking;
-  /** The desk's page of the booking's quote. */
+  /** The desk's page of the booking's quote (every version). */
   quoteHref: string;
+  /** The planner revising the quote. */
+  reviseHref: string;
+  /** The quote itself (fit report, photos), loaded by the route. */
+  quoteLoad: QuoteLoad;
 }
 
 /** What the desk does next from each state, and how the button says it. */
@@ -64,7 +77,28 @@ const deskStateText: Record<BookingState, string> = {
 };
 
 const MOVABLE: readonly BookingState[] = ['held', 'requested', 'confirmed'];
+/** States in which the desk records the vehicle's arrival (the state itself stays). */
+const ARRIVABLE: readonly BookingState[] = ['requested', 'confirmed'];
 const CANCELLABLE: readonly BookingState[] = ['held', 'requested', 'confirmed', 'in-progress'];
+/** States in which revising the quote can still change the job. */
+const REVISABLE: readonly BookingState[] = ['held', 'requested', 'confirmed', 'in-progress'];
+
+/** The newer version's state for the desk, in one sentence. */
+function newerVersionText(booking: Booking, number: number, state: string): string {
+  const booked = `The booking stays on version ${booking.quote.versionNumber}`;
+  switch (state) {
+    case 'sent':
+      return `Version ${number} (revised) awaits the customer’s answer. ${booked} until they accept it.`;
+    case 'declined':
+      return `The customer declined version ${number}. ${booked}.`;
+    case 'draft':
+      return `Version ${number} is a draft, not sent yet. ${booked}.`;
+    case 'expired':
+      return `Version ${number} expired without an answer. ${booked}.`;
+    default:
+      return `The quote has a version ${number}. ${booked}.`;
+  }
+}
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   const headingId = useId();
@@ -81,21 +115,44 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
 }
 
 /**
- * One booking as the front desk works it: the state and the step that comes next (confirm,
- * vehicle in, complete), move and cancel, then times and bays, the customer, the quote, the
- * payments and the customer's request to move, if any.
+ * One booking as the front desk works it. First what needs the desk: a booking that must be
+ * moved (a revised quote no longer fits its time) and the customer's request to move, each with
+ * a Move button. Then the state and the steps that come next (confirm; mark the vehicle
+ * arrived; start work; complete), move and cancel; the times and bays; the audit trail.
+ * Beside them the customer, the quote (its version, a newer revision, "Revise quote"), the fit
+ * report and photos of the booked version, and the payments with each top-up.
  */
-export function DeskBookingDetail({ booking, quoteHref }: Props) {
+export function DeskBookingDetail({ booking, quoteHref, reviseHref, quoteLoad }: Props) {
   const [dialog, setDialog] = useState<'move' | 'cancel' | null>(null);
   const advance = useAdvanceBooking();
+  const arrive = useMarkArrived();
   const statusHeadingId = useId();
   const timesHeadingId = useId();
-  const next = nextSteps[booking.state];
+  const step = nextSteps[booking.state];
+  // Once the vehicle is marked in, the next step is only to start the work.
+  const next =
+    step && booking.state === 'confirmed' && booking.arrivedAt
+      ? { ...step, label: 'Start work' }
+      : step;
+  const arrivable = ARRIVABLE.includes(booking.state) && !booking.arrivedAt;
   const movable = MOVABLE.includes(booking.state);
   const cancellable = CANCELLABLE.includes(booking.state);
+  const revisable = REVISABLE.includes(booking.state);
   const { timeZone } = booking;
   const close = () => setDialog(null);
   const advancedTo = advance.isSuccess ? advance.data.state : null;
+  const refusal = advance.error ?? arrive.error;
+  const moveAsked = moveRequestStatus(booking);
+  const newer = newerQuoteVersion(booking);
+  const needsMove = movable ? booking.needsMove : null;
+  const resetActions = () => {
+    advance.reset();
+    arrive.reset();
+  };
+  const openMove = () => {
+    resetActions();
+    setDialog('move');
+  };
 
   return (
     <Box
@@ -106,6 +163,69 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
         alignItems: 'start',
       }}
     >
+      {(needsMove || moveAsked.kind !== 'none') && (
+        <Box
+          role="region"
+          aria-label="Needs the desk"
+          sx={{ gridColumn: '1 / -1', display: 'grid', gap: 1.5 }}
+        >
+          {needsMove && (
+            <Alert severity="error" variant="outlined" sx={{ bgcolor: 'background.paper' }}>
+              <AlertTitle>Needs a move: the revised job no longer fits this time</AlertTitle>
+              <Typography>{needsMove.reason}</Typography>
+              <Typography variant="body2" sx={{ mt: 0.5 }}>
+                Since {formatEventTime(needsMove.since, timeZone)}. The booking keeps its present
+                bays until you move it.
+              </Typography>
+              <Button
+                variant="contained"
+                color="error"
+                startIcon={<EditCalendarOutlined aria-hidden />}
+                onClick={openMove}
+                sx={{ mt: 1.5 }}
+              >
+                Move to a time that fits
+              </Button>
+            </Alert>
+          )}
+          {moveAsked.kind === 'waiting' && booking.moveRequest && (
+            <Alert severity="warning" variant="outlined" sx={{ bgcolor: 'background.paper' }}>
+              <AlertTitle>The customer asks to move it</AlertTitle>
+              <Typography sx={{ fontSize: '1.05rem' }}>“{booking.moveRequest.note}”</Typography>
+              <Typography variant="body2" sx={{ mt: 0.5 }}>
+                Asked {formatEventTime(booking.moveRequest.requestedAt, timeZone)}.
+              </Typography>
+              {movable && !needsMove && (
+                <Button
+                  variant="contained"
+                  color="warning"
+                  startIcon={<EditCalendarOutlined aria-hidden />}
+                  onClick={openMove}
+                  sx={{ mt: 1.5 }}
+                >
+                  Move it
+                </Button>
+              )}
+            </Alert>
+          )}
+          {moveAsked.kind === 'moved' && booking.moveRequest && (
+            <Alert severity="success" role="note">
+              The customer asked to move it on{' '}
+              {formatEventTime(booking.moveRequest.requestedAt, timeZone)} (“
+              {booking.moveRequest.note}”). {moveAsked.move.detail}
+            </Alert>
+          )}
+          {moveAsked.kind === 'closed' && booking.moveRequest && (
+            <Alert severity="info" role="note">
+              The customer asked to move it on{' '}
+              {formatEventTime(booking.moveRequest.requestedAt, timeZone)} (“
+              {booking.moveRequest.note}”); the booking is now{' '}
+              {bookingStateLabels[booking.state].toLowerCase()}.
+            </Alert>
+          )}
+        </Box>
+      )}
+
       <Box sx={{ display: 'grid', gap: 3, minWidth: 0 }}>
         <Card component="section" aria-labelledby={statusHeadingId}>
           <CardContent sx={{ display: 'grid', gap: 1.5 }}>
@@ -114,6 +234,10 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
                 Status
               </Typography>
               <BookingStateChip state={booking.state} />
+              {needsMove && <Chip size="small" color="error" label="Needs a move" />}
+              {moveAsked.kind === 'waiting' && (
+                <Chip size="small" color="warning" variant="outlined" label="Move requested" />
+              )}
             </Box>
             <Typography>{deskStateText[booking.state]}</Typography>
             {booking.state === 'held' && booking.holdExpiresAt && (
@@ -126,13 +250,18 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
                 Booking {booking.reference} is now {bookingStateLabels[advancedTo].toLowerCase()}.
               </Alert>
             )}
-            {advance.isError && (
+            {booking.arrivedAt && (
+              <Typography sx={{ fontWeight: 500 }}>
+                Vehicle in since {formatEventTime(booking.arrivedAt, timeZone)}.
+              </Typography>
+            )}
+            {refusal && (
               <Alert severity="error">
                 <AlertTitle>The booking was not changed</AlertTitle>
-                {isApiError(advance.error) ? advance.error.message : 'Please try again.'}
+                {isApiError(refusal) ? refusal.message : 'Please try again.'}
               </Alert>
             )}
-            {(next || movable || cancellable) && (
+            {(next || arrivable || movable || cancellable) && (
               <Box
                 role="group"
                 aria-label="Actions"
@@ -148,20 +277,39 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
                         next.icon
                       )
                     }
-                    disabled={advance.isPending}
-                    onClick={() => advance.mutate({ bookingId: booking.id, state: next.state })}
+                    disabled={advance.isPending || arrive.isPending}
+                    onClick={() => {
+                      arrive.reset();
+                      advance.mutate({ bookingId: booking.id, state: next.state });
+                    }}
                   >
                     {next.label}
+                  </Button>
+                )}
+                {arrivable && (
+                  <Button
+                    variant="outlined"
+                    startIcon={
+                      arrive.isPending ? (
+                        <CircularProgress size={18} color="inherit" aria-hidden />
+                      ) : (
+                        <LocalShippingOutlined aria-hidden />
+                      )
+                    }
+                    disabled={advance.isPending || arrive.isPending}
+                    onClick={() => {
+                      advance.reset();
+                      arrive.mutate(booking.id);
+                    }}
+                  >
+                    Mark arrived
                   </Button>
                 )}
                 {movable && (
                   <Button
                     variant="outlined"
                     startIcon={<EditCalendarOutlined aria-hidden />}
-                    onClick={() => {
-                      advance.reset();
-                      setDialog('move');
-                    }}
+                    onClick={openMove}
                   >
                     Move
                   </Button>
@@ -172,7 +320,7 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
                     color="error"
                     startIcon={<EventBusyOutlined aria-hidden />}
                     onClick={() => {
-                      advance.reset();
+                      resetActions();
                       setDialog('cancel');
                     }}
                   >
@@ -183,15 +331,6 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
             )}
           </CardContent>
         </Card>
-
-        {booking.moveRequest && (
-          <Section title="The customer asks to move it">
-            <Typography>“{booking.moveRequest.note}”</Typography>
-            <Typography variant="body2" color="text.secondary" sx={{ mt: 1 }}>
-              Asked on {formatLocalDateTime(booking.moveRequest.requestedAt, timeZone)}.
-            </Typography>
-          </Section>
-        )}
 
         <Card component="section" aria-labelledby={timesHeadingId}>
           <CardContent>
@@ -206,6 +345,13 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
             />
           </CardContent>
         </Card>
+
+        <Section title="Audit trail">
+          <BookingAuditTrail booking={booking} />
+          <Typography variant="body2" color="text.secondary" sx={{ mt: 1.5 }}>
+            Times on the workshop’s clock ({timeZone.replace(/_/g, ' ')}).
+          </Typography>
+        </Section>
       </Box>
 
       <Box sx={{ display: 'grid', gap: 3, minWidth: 0 }}>
@@ -220,15 +366,50 @@ export function DeskBookingDetail({ booking, quoteHref }: Props) {
                 </Link>
               }
             />
+            <DetailRow label="Rego" value={booking.rego ?? 'Not given'} />
           </DetailList>
         </Section>
 
         <Section title="Quote">
           <BookingQuoteRows booking={booking} quoteHref={quoteHref} />
+          {newer && (
+            <Alert
+              severity={newer.state === 'sent' ? 'warning' : 'info'}
+              role="note"
+              sx={{ mt: 1.5 }}
+            >
+              {newerVersionText(booking, newer.number, newer.state)}{' '}
+              <Link component={RouterLink} to={quoteHref}>
+                See version {newer.number}
+              </Link>
+            </Alert>
+          )}
+          {revisable && (
+            <Button
+              component={RouterLink}
+              to={reviseHref}
+              variant="outlined"
+              startIcon={<RateReviewOutlined aria-hidden />}
+              sx={{ mt: 1.5 }}
+            >
+              Revise quote
+            </Button>
+          )}
         </Section>
+
+        <Section title={`Fit report, version ${booking.quote.versionNumber}`}>
+          <BookedFitReport booking={booking} load={quoteLoad} />
+        </Section>
+
+        {quoteLoad.quote && (
+          <Section title="Photos">
+            <QuotePhotos photos={quoteLoad.quote.photos} />
+          </Section>
+        )}
 
         <Section title="Payments">
           <PaymentsSummary booking={booking} />
+          <PaymentLines booking={booking} />
         </Section>
       </Box>
 

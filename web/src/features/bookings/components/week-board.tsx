@@ -18,8 +18,8 @@ interface Props {
 }
 
 /**
- * The week, Monday first: a column per day listing its bookings by start time with their bays;
- * a closed day says why.
+ * The week, Monday first: a column per day (on a phone, one day under another) listing its
+ * bookings by start time with their bays; a closed day says why.
  */
 export function WeekBoard({ setup, bookings, date, today, hrefFor, dayHref }: Props) {
   const { timeZone } = setup;
@@ -32,7 +32,8 @@ export function WeekBoard({ setup, bookings, date, today, hrefFor, dayHref }: Pr
         m: 0,
         p: 0,
         display: 'grid',
-        gridTemplateColumns: 'repeat(7, minmax(128px, 1fr))',
+        // A phone lists the days one under another; wider screens set the week side by side.
+        gridTemplateColumns: { xs: 'minmax(0, 1fr)', md: 'repeat(7, minmax(120px, 1fr))' },
         gap: 1,
         overflowX: 'auto',
       }}

@@ -1,14 +1,21 @@
 import { describe, expect, it } from 'vitest';
 import type { Bay, Booking, OpeningHoursEntry, PlannedSegment } from '@/types/api';
 import {
+  BLOCK_METRICS,
+  BOARD_SCALE,
   boardBays,
+  boardHeightPx,
   boardWindow,
   bookingsOnDay,
+  dayBands,
   dayStatus,
+  layoutBlocks,
+  minuteToPx,
   placeSegments,
-  rowKinds,
+  rowLines,
   weekDates,
   workshopToday,
+  type LaidOutBlock,
 } from './day-board';
 
 const SYDNEY = 'Australia/Sydney';
@@ -85,17 +92,55 @@ describe('the board’s rows', () => {
     expect(window).toEqual({ startMinute: 450, endMinute: 1020, rows: 19 });
   });
 
-  it('shade the break and the time outside a short day’s hours', () => {
+  it('shade the break and the time outside a short day’s hours to the minute', () => {
     const window = boardWindow(week)!;
-    const weekday = rowKinds(window, week[0]);
-    expect(weekday[0]).toBe('work');
-    // 12:00 is row 9 from 07:30 (9 × 30 minutes = 4 h 30).
-    expect(weekday[9]).toBe('break');
-    expect(weekday[10]).toBe('work');
-    const saturday = rowKinds(window, week[5]);
-    expect(saturday[0]).toBe('closed');
-    expect(saturday[1]).toBe('work');
-    expect(saturday[9]).toBe('closed');
+    // 07:30–17:00 with the break 12:00–12:30: only the break is shaded on a weekday.
+    expect(
+      dayBands(window, week[0]).map(({ kind, fromMinute, toMinute }) => [
+        kind,
+        fromMinute,
+        toMinute,
+      ]),
+    ).toEqual([['break', 720, 750]]);
+    // Saturday 08:00–12:00 on the week's 07:30–17:00 board: closed before and after.
+    const saturday = dayBands(window, week[5]);
+    expect(saturday.map(({ kind, fromMinute, toMinute }) => [kind, fromMinute, toMinute])).toEqual([
+      ['closed', 450, 480],
+      ['closed', 720, 1020],
+    ]);
+    // On the board's own scale: 30 minutes (07:30–08:00) are one row.
+    expect([saturday[0].topPx, saturday[0].heightPx]).toEqual([0, BOARD_SCALE.rowHeightPx]);
+  });
+
+  it('shade a break that does not start or end on a row line where it really is', () => {
+    const window = boardWindow(week)!;
+    const lateBreak: OpeningHoursEntry = {
+      ...week[0],
+      breakStartsAt: '12:15',
+      breakEndsAt: '13:00',
+    };
+    const [band] = dayBands(window, lateBreak);
+    // 12:15 is 285 minutes after 07:30; 45 minutes of break.
+    expect(band).toMatchObject({ kind: 'break', fromMinute: 735, toMinute: 780 });
+    expect(band.topPx).toBe(minuteToPx(285));
+    expect(band.heightPx).toBe(minuteToPx(330) - minuteToPx(285));
+    // A row height is 30 minutes, so 285 minutes are 9.5 rows down: half-way into the 12:00 row.
+    expect(band.topPx).toBe(9.5 * BOARD_SCALE.rowHeightPx);
+  });
+
+  it('draws the row lines on the same scale, one every 30 minutes', () => {
+    const window = boardWindow(week)!;
+    const lines = rowLines(window);
+    expect(lines).toHaveLength(19);
+    expect(lines[0]).toEqual({ minute: 450, topPx: 0, onTheHour: false });
+    expect(lines[1]).toEqual({ minute: 480, topPx: BOARD_SCALE.rowHeightPx, onTheHour: true });
+    // 13:00 is 11 rows below 07:30.
+    expect(lines[11]).toEqual({
+      minute: 780,
+      topPx: 11 * BOARD_SCALE.rowHeightPx,
+      onTheHour: true,
+    });
+    expect(boardHeightPx(window)).toBe(19 * BOARD_SCALE.rowHeightPx);
   });
 
   it('has no rows when the workshop never opens', () => {
@@ -114,10 +159,12 @@ describe('placing stays on the rows', () => {
       segment(align, '2026-12-03T00:00:00.000Z', '2026-12-03T01:00:00.000Z'),
     ]);
     const blocks = placeSegments([job], '2026-12-03', SYDNEY, window);
-    expect(blocks.map(({ segment: s, rowStart, rowEnd }) => [s.bayId, rowStart, rowEnd])).toEqual([
-      // 07:30–11:00 local: rows 0 to 7; 11:00–12:00: rows 7 to 9.
-      ['bay-hoist', 0, 7],
-      ['bay-align', 7, 9],
+    expect(
+      blocks.map(({ segment: s, fromMinute, toMinute }) => [s.bayId, fromMinute, toMinute]),
+    ).toEqual([
+      // 07:30–11:00 local: minutes 0 to 210 of the board; 11:00–12:00: 210 to 270.
+      ['bay-hoist', 0, 210],
+      ['bay-align', 210, 270],
     ]);
     expect(placeSegments([job], '2026-12-04', SYDNEY, window)).toEqual([]);
   });
@@ -129,7 +176,7 @@ describe('placing stays on the rows', () => {
       segment(hoist, '2027-06-01T21:30:00.000Z', '2027-06-01T22:30:00.000Z'),
     ]);
     const [block] = placeSegments([job], '2027-06-02', SYDNEY, window);
-    expect([block.rowStart, block.rowEnd]).toEqual([0, 2]);
+    expect([block.fromMinute, block.toMinute]).toEqual([0, 60]);
   });
 
   it('shows a stay that runs overnight on both days, cut at the board’s edges', () => {
@@ -138,9 +185,11 @@ describe('placing stays on the rows', () => {
       segment(hoist, '2026-12-03T04:00:00.000Z', '2026-12-03T22:00:00.000Z'),
     ]);
     const [first] = placeSegments([job], '2026-12-03', SYDNEY, window);
-    expect([first.rowStart, first.rowEnd, first.continuesAfter]).toEqual([15, 19, true]);
+    // 15:00 is 450 minutes after 07:30; the board ends at 17:00 (570).
+    expect([first.fromMinute, first.toMinute, first.continuesAfter]).toEqual([450, 570, true]);
     const [second] = placeSegments([job], '2026-12-04', SYDNEY, window);
-    expect([second.rowStart, second.rowEnd, second.continuesFromBefore]).toEqual([0, 3, true]);
+    // 07:30 to 09:00 the next morning.
+    expect([second.fromMinute, second.toMinute, second.continuesFromBefore]).toEqual([0, 90, true]);
     expect(bookingsOnDay([job], '2026-12-04', SYDNEY)[0].startsThatDay).toBe(false);
   });
 
@@ -167,6 +216,88 @@ describe('placing stays on the rows', () => {
       'bay-align',
       'bay-spare',
     ]);
+  });
+});
+
+describe('drawing the blocks to scale', () => {
+  const window = boardWindow(week)!;
+  const gap = BLOCK_METRICS.gapPx;
+
+  /**
+   * A clock time on Thursday 3 Dec 2026 in the workshop, as UTC.
+   * Source: IANA time zone database, Australia/Sydney: AEDT (UTC+11) in December.
+   */
+  function at(hhmm: string): string {
+    return new Date(`2026-12-03T${hhmm}:00+11:00`).toISOString();
+  }
+
+  function laidOut(...jobs: Array<[Bay, string, string]>): LaidOutBlock[] {
+    const bookings = jobs.map(([bay, from, to], index) =>
+      booking(`L${index}`, 'confirmed', [segment(bay, at(from), at(to))]),
+    );
+    return layoutBlocks(placeSegments(bookings, '2026-12-03', SYDNEY, window), window);
+  }
+
+  function bottom(block: LaidOutBlock): number {
+    return block.box.topPx + block.box.heightPx;
+  }
+
+  it('draws a 30-minute stay at 07:30 one full row tall, with room for two lines', () => {
+    const [block] = laidOut([hoist, '07:30', '08:00']);
+    // One row is 44 px (30 minutes); the block sits inside it, 1 px clear of each line.
+    expect(block.box).toEqual({ topPx: 1, heightPx: 42, lines: 2 });
+    expect(bottom(block)).toBeLessThan(rowLines(window)[1].topPx);
+  });
+
+  it('puts an afternoon stay exactly between the lines of its times', () => {
+    const [block] = laidOut([align, '13:15', '14:45']);
+    // 13:15 is 345 minutes after 07:30: 345 × 44 / 30 = 506 px; 14:45 is 435 minutes: 638 px.
+    expect(block.box.topPx).toBe(506 + gap);
+    expect(bottom(block)).toBe(638 - gap);
+    // The same scale as the lines: 13:00 is line 11, and a quarter-hour is half a row.
+    const lines = rowLines(window);
+    expect(block.box.topPx - gap).toBe(lines[11].topPx + BOARD_SCALE.rowHeightPx / 2);
+    expect(bottom(block) + gap).toBe(lines[14].topPx + BOARD_SCALE.rowHeightPx / 2);
+  });
+
+  it('keeps two alignment jobs that meet at 11:45 apart', () => {
+    const [first, second] = laidOut([align, '10:45', '11:45'], [align, '11:45', '12:45']);
+    // 11:45 is 255 minutes after 07:30: 255 × 44 / 30 = 374 px, the edge both share.
+    expect(bottom(first)).toBe(374 - gap);
+    expect(second.box.topPx).toBe(374 + gap);
+    expect(bottom(first)).toBeLessThan(second.box.topPx);
+  });
+
+  it('draws a stay over the break at its true length', () => {
+    const [block] = laidOut([hoist, '11:30', '13:00']);
+    // 240 to 330 minutes after 07:30: 352 px to 484 px.
+    expect(block.box.topPx).toBe(352 + gap);
+    expect(block.box.heightPx).toBe(484 - 352 - 2 * gap);
+  });
+
+  it('makes a short stay readable when the time after it is free', () => {
+    const [short] = laidOut([hoist, '07:30', '07:45']);
+    // 15 minutes are 22 px, too small for two lines: it is drawn at the least readable height.
+    expect(short.box).toEqual({ topPx: 1, heightPx: BLOCK_METRICS.minHeightPx, lines: 2 });
+  });
+
+  it('never grows a short stay over the next one in its bay', () => {
+    const [short, next] = laidOut([hoist, '07:30', '07:45'], [hoist, '07:45', '09:00']);
+    // Only its own 22 px (less the gaps) are free: one line, and clear of the next stay.
+    expect(short.box).toEqual({ topPx: 1, heightPx: 20, lines: 1 });
+    expect(bottom(short)).toBeLessThan(next.box.topPx);
+  });
+
+  it('lets a stay in another bay take no room from a short one', () => {
+    const blocks = laidOut([hoist, '07:30', '07:45'], [align, '07:45', '08:15']);
+    const short = blocks.find((block) => block.segment.bayId === hoist.id)!;
+    expect(short.box.heightPx).toBe(BLOCK_METRICS.minHeightPx);
+  });
+
+  it('does not draw a short stay at the day’s end past the board', () => {
+    const [late] = laidOut([align, '16:45', '17:00']);
+    expect(bottom(late)).toBeLessThanOrEqual(boardHeightPx(window));
+    expect(late.box.heightPx).toBe(20);
   });
 });
 

@@ -57,23 +57,103 @@ export function boardWindow(openingHours: readonly OpeningHoursEntry[]): BoardWi
   return { startMinute, endMinute, rows: (endMinute - startMinute) / ROW_MINUTES };
 }
 
-/** How each row of a day reads: working time, the break, or outside that day's hours. */
-export type RowKind = 'work' | 'break' | 'closed';
+/**
+ * The board's vertical scale. Every vertical position on the board (row lines, shaded break and
+ * closed time, blocks) comes from minutes after the first row's start through this one scale,
+ * so a block starting at 13:15 sits exactly a quarter of the way past the 13:00 line.
+ */
+export interface BoardScale {
+  /** Height of one row of `ROW_MINUTES` minutes. */
+  rowHeightPx: number;
+}
 
-export function rowKinds(window: BoardWindow, hours: OpeningHoursEntry | null): RowKind[] {
+/** 30 minutes are 44 px: two lines of a block's text fit in half an hour. */
+export const BOARD_SCALE: BoardScale = { rowHeightPx: 44 };
+
+/**
+ * Pixels below the first row's top of a time `minutes` after the first row's start. Rounded
+ * to whole pixels the same way for every caller, so the bottom of one stay and the top of the
+ * next, at the same minute, are the same pixel.
+ */
+export function minuteToPx(minutes: number, scale: BoardScale = BOARD_SCALE): number {
+  return Math.round((minutes * scale.rowHeightPx) / ROW_MINUTES);
+}
+
+/** The body's height: every row of the window. */
+export function boardHeightPx(window: BoardWindow, scale: BoardScale = BOARD_SCALE): number {
+  return minuteToPx(window.endMinute - window.startMinute, scale);
+}
+
+/** One row line: its clock time, where it is drawn, and whether it is on the hour. */
+export interface RowLine {
+  minute: number;
+  topPx: number;
+  onTheHour: boolean;
+}
+
+export function rowLines(window: BoardWindow, scale: BoardScale = BOARD_SCALE): RowLine[] {
+  return Array.from({ length: window.rows }, (_, index) => {
+    const minute = window.startMinute + index * ROW_MINUTES;
+    return {
+      minute,
+      topPx: minuteToPx(minute - window.startMinute, scale),
+      onTheHour: minute % 60 === 0,
+    };
+  });
+}
+
+/** Time of a day the workshop does not work: the break, or before opening and after closing. */
+export interface DayBand {
+  kind: 'break' | 'closed';
+  /** Minutes after local midnight. */
+  fromMinute: number;
+  toMinute: number;
+  topPx: number;
+  heightPx: number;
+}
+
+/**
+ * The shaded stretches of one day on the board, to the minute (not rounded to rows): before
+ * opening, the break and after closing. A day without hours is closed from edge to edge.
+ */
+export function dayBands(
+  window: BoardWindow,
+  hours: OpeningHoursEntry | null,
+  scale: BoardScale = BOARD_SCALE,
+): DayBand[] {
   const opens = hours?.open ? clockMinutes(hours.opensAt) : null;
   const closes = hours?.open ? clockMinutes(hours.closesAt) : null;
   const breakStarts = clockMinutes(hours?.breakStartsAt);
   const breakEnds = clockMinutes(hours?.breakEndsAt);
-  return Array.from({ length: window.rows }, (_, index) => {
-    const from = window.startMinute + index * ROW_MINUTES;
-    const to = from + ROW_MINUTES;
-    if (opens === null || closes === null || from < opens || to > closes) return 'closed';
-    if (breakStarts !== null && breakEnds !== null && from < breakEnds && to > breakStarts) {
-      return 'break';
+  const stretches: Array<Pick<DayBand, 'kind' | 'fromMinute' | 'toMinute'>> = [];
+  if (opens === null || closes === null || closes <= opens) {
+    stretches.push({ kind: 'closed', fromMinute: window.startMinute, toMinute: window.endMinute });
+  } else {
+    stretches.push({ kind: 'closed', fromMinute: window.startMinute, toMinute: opens });
+    if (breakStarts !== null && breakEnds !== null && breakEnds > breakStarts) {
+      stretches.push({
+        kind: 'break',
+        fromMinute: Math.max(breakStarts, opens),
+        toMinute: Math.min(breakEnds, closes),
+      });
     }
-    return 'work';
-  });
+    stretches.push({ kind: 'closed', fromMinute: closes, toMinute: window.endMinute });
+  }
+  return stretches
+    .map((stretch) => ({
+      ...stretch,
+      fromMinute: Math.max(stretch.fromMinute, window.startMinute),
+      toMinute: Math.min(stretch.toMinute, window.endMinute),
+    }))
+    .filter((stretch) => stretch.toMinute > stretch.fromMinute)
+    .map((stretch) => {
+      const topPx = minuteToPx(stretch.fromMinute - window.startMinute, scale);
+      return {
+        ...stretch,
+        topPx,
+        heightPx: minuteToPx(stretch.toMinute - window.startMinute, scale) - topPx,
+      };
+    });
 }
 
 /** States drawn on the board: a cancelled or expired booking holds no bay. */
@@ -143,13 +223,13 @@ function minutesOnDate(isoInstant: string, date: string, timeZone: string): numb
   return local.hour * 60 + local.minute;
 }
 
-/** One stay of a booking in one bay, placed on the rows of one day. */
+/** One stay of a booking in one bay, placed on the window of one day. */
 export interface PlacedBlock {
   booking: Booking;
   segment: PlannedSegment;
-  /** First row (0-based) the stay covers, and the row after its last. */
-  rowStart: number;
-  rowEnd: number;
+  /** Minutes after the first row's start where the stay begins and ends, cut to the window. */
+  fromMinute: number;
+  toMinute: number;
   /** The stay began on an earlier day or before the first row. */
   continuesFromBefore: boolean;
   /** The stay runs on past the last row (to another day). */
@@ -157,9 +237,9 @@ export interface PlacedBlock {
 }
 
 /**
- * Every stay of the given bookings that falls on `date`, as rows of the window; a stay running
- * over the evening shows on each day up to the window's edge. Cancelled and expired bookings
- * are left out.
+ * Every stay of the given bookings that falls on `date`, in minutes of the window; a stay
+ * running over the evening shows on each day up to the window's edge. Cancelled and expired
+ * bookings are left out. Sorted by start.
  */
 export function placeSegments(
   bookings: readonly Booking[],
@@ -176,19 +256,95 @@ export function placeSegments(
       const clippedFrom = Math.max(from, window.startMinute);
       const clippedTo = Math.min(to, window.endMinute);
       if (clippedTo <= clippedFrom) continue;
-      const rowStart = Math.floor((clippedFrom - window.startMinute) / ROW_MINUTES);
-      const rowEnd = Math.ceil((clippedTo - window.startMinute) / ROW_MINUTES);
       placed.push({
         booking,
         segment,
-        rowStart,
-        rowEnd: Math.max(rowEnd, rowStart + 1),
+        fromMinute: clippedFrom - window.startMinute,
+        toMinute: clippedTo - window.startMinute,
         continuesFromBefore: from < window.startMinute,
         continuesAfter: to > window.endMinute && to !== MINUTES_PER_DAY,
       });
     }
   }
-  return placed.sort((a, b) => a.rowStart - b.rowStart);
+  return placed.sort(
+    (a, b) => a.fromMinute - b.fromMinute || a.segment.bayId.localeCompare(b.segment.bayId),
+  );
+}
+
+/** How blocks are drawn: the gap around each, its least readable height, its text lines. */
+export interface BlockMetrics {
+  /** Space kept between a block and the lines (and blocks) above and below it. */
+  gapPx: number;
+  /** The least height a block is drawn at, when there is room below it. */
+  minHeightPx: number;
+  /** Borders and padding of a block, top and bottom together. */
+  chromePx: number;
+  /** One line of a block's text. */
+  lineHeightPx: number;
+}
+
+/**
+ * A block's border is 2 px and its padding 2 px (top and bottom: 8 px); its text is 12 px on
+ * 15 px lines, so 38 px holds two lines: the customer and the vehicle.
+ */
+export const BLOCK_METRICS: BlockMetrics = {
+  gapPx: 1,
+  minHeightPx: 38,
+  chromePx: 8,
+  lineHeightPx: 15,
+};
+
+/** Where one block is drawn in its bay's column. */
+export interface BlockBox {
+  /** From the first row's top. */
+  topPx: number;
+  heightPx: number;
+  /** Whole lines of text that fit (at least 1: a block that small shows the customer only). */
+  lines: number;
+}
+
+export interface LaidOutBlock extends PlacedBlock {
+  box: BlockBox;
+}
+
+/**
+ * Pixel boxes for the blocks of one day. The top and bottom of a stay are its start and end on
+ * the board's scale (the same as the row lines), inset by the gap, so two stays that meet at a
+ * minute in one bay leave a gap of twice the gap between them and never overlap. A stay too
+ * short to read is drawn taller, up to the least readable height, but only into free time
+ * below it: never over the next stay in its bay nor past the board's end.
+ */
+export function layoutBlocks(
+  blocks: readonly PlacedBlock[],
+  window: BoardWindow,
+  scale: BoardScale = BOARD_SCALE,
+  metrics: BlockMetrics = BLOCK_METRICS,
+): LaidOutBlock[] {
+  const bottomPx = boardHeightPx(window, scale);
+  const byBay = new Map<string, PlacedBlock[]>();
+  for (const block of blocks) {
+    const column = byBay.get(block.segment.bayId) ?? [];
+    column.push(block);
+    byBay.set(block.segment.bayId, column);
+  }
+  const laidOut: LaidOutBlock[] = [];
+  for (const column of byBay.values()) {
+    const sorted = [...column].sort((a, b) => a.fromMinute - b.fromMinute);
+    sorted.forEach((block, index) => {
+      const startPx = minuteToPx(block.fromMinute, scale);
+      const endPx = minuteToPx(block.toMinute, scale);
+      // The next stay in this bay (sorted by start): the short block may grow only up to it.
+      const next = sorted[index + 1];
+      const roomEndPx = next ? minuteToPx(next.fromMinute, scale) : bottomPx;
+      const topPx = startPx + metrics.gapPx;
+      const trueHeightPx = Math.max(1, endPx - startPx - 2 * metrics.gapPx);
+      const roomPx = roomEndPx - startPx - 2 * metrics.gapPx;
+      const heightPx = Math.max(trueHeightPx, Math.min(metrics.minHeightPx, roomPx));
+      const lines = Math.max(1, Math.floor((heightPx - metrics.chromePx) / metrics.lineHeightPx));
+      laidOut.push({ ...block, box: { topPx, heightPx, lines } });
+    });
+  }
+  return laidOut.sort((a, b) => a.fromMinute - b.fromMinute);
 }
 
 /**

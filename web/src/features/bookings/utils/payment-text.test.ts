@@ -6,9 +6,13 @@ import {
   depositPaidAt,
   openPayment,
   payDepositLabel,
+  latestPaidPayment,
   paymentCheckPhase,
+  paymentLines,
   paymentRows,
+  payTopUpLabel,
   paymentStatusNote,
+  topUpDue,
 } from './payment-text';
 
 const payment = (changes: Partial<BookingPayment>): BookingPayment => ({
@@ -70,6 +74,55 @@ describe('the Payments section', () => {
     ]);
   });
 
+  it('asks for the difference when a revised quote’s deposit is higher than what was paid', () => {
+    const revised = { ...requested, state: 'confirmed' as const, depositTopUpCents: 20_000 };
+    // Source: ISO 4217, AUD has 2 minor units; Unicode CLDR en-AU currency format ¤#,##0.00.
+    expect(paymentRows(revised)).toContainEqual({
+      label: 'Deposit top-up due',
+      value: '$200.00',
+    });
+    expect(payTopUpLabel(20_000)).toBe('Pay the difference ($200.00)');
+    // Nothing due: no row, and none once the booking has ended.
+    expect(paymentRows({ ...revised, depositTopUpCents: 0 }).map((row) => row.label)).toEqual([
+      'Deposit paid',
+      'Balance due',
+    ]);
+    expect(
+      paymentRows({ ...revised, state: 'cancelled' }).some((row) => row.label.includes('top-up')),
+    ).toBe(false);
+  });
+
+  it('lists each payment, the deposit and its top-ups, with what became of it', () => {
+    const topUpAt = '2026-12-03T01:00:00.000Z';
+    const booking = {
+      ...requested,
+      payments: [
+        payment({ status: 'expired' }),
+        payment({ status: 'paid', paidAt, refundedCents: 25_000 }),
+        payment({ kind: 'top-up', status: 'paid', amountCents: 20_000, paidAt: topUpAt }),
+        payment({ kind: 'top-up', status: 'failed', amountCents: 20_000 }),
+      ],
+    };
+    // Source: IANA tz database, Australia/Sydney AEDT (+11:00) in December: 23:15Z on 2 Dec is
+    // 10:15 am on Thu 3 Dec; 01:00Z on 3 Dec is 12:00 pm that day. ISO 4217 / CLDR as above.
+    const lines = paymentLines(booking).map(({ label, amount, status, refunded }) => [
+      label,
+      amount,
+      status.replace(/\u202f/g, ' '),
+      refunded,
+    ]);
+    expect(lines).toEqual([
+      ['Deposit', '$1,000.00', 'Payment page closed unpaid', null],
+      ['Deposit', '$1,000.00', 'Paid Thu 3 Dec 2026, 10:15 am', '$250.00 refunded'],
+      ['Deposit top-up', '$200.00', 'Paid Thu 3 Dec 2026, 12:00 pm', null],
+      ['Deposit top-up', '$200.00', 'Payment did not go through', null],
+    ]);
+    expect(paymentLines(booking, { paidOnly: true }).map((line) => line.label)).toEqual([
+      'Deposit',
+      'Deposit top-up',
+    ]);
+  });
+
   it('says what became of a payment page that was not completed', () => {
     expect(paymentStatusNote({ ...held, payments: [payment({ status: 'open' })] })).toBe(
       'A payment page was opened for this deposit; the payment is not complete.',
@@ -116,6 +169,38 @@ describe('the success page reads the booking, not the address it was sent to', (
   it('reports the payment once the booking has moved on from held', () => {
     expect(paymentCheckPhase(requested, false)).toBe('received');
     expect(paymentCheckPhase({ ...requested, state: 'confirmed' }, true)).toBe('received');
+  });
+
+  it('follows a top-up: waits while its page is open, then received, or not complete', () => {
+    const deposit = payment({ status: 'paid', paidAt });
+    const confirmed = { ...requested, state: 'confirmed' as const, depositTopUpCents: 20_000 };
+    const topUpOpen = {
+      ...confirmed,
+      payments: [deposit, payment({ kind: 'top-up', status: 'open', amountCents: 20_000 })],
+    };
+    expect(paymentCheckPhase(topUpOpen, false)).toBe('waiting');
+    expect(paymentCheckPhase(topUpOpen, true)).toBe('not-heard');
+    // The page closed unpaid and the difference is still due.
+    const lapsed = {
+      ...confirmed,
+      payments: [deposit, payment({ kind: 'top-up', status: 'expired', amountCents: 20_000 })],
+    };
+    expect(paymentCheckPhase(lapsed, false)).toBe('not-complete');
+    expect(topUpDue(lapsed)).toBe(true);
+    // Paid: nothing more is due.
+    const topUp = payment({
+      kind: 'top-up',
+      status: 'paid',
+      amountCents: 20_000,
+      paidAt: '2026-12-03T01:00:00.000Z',
+    });
+    const paidUp = { ...confirmed, depositTopUpCents: 0, payments: [deposit, topUp] };
+    expect(paymentCheckPhase(paidUp, false)).toBe('received');
+    expect(topUpDue(paidUp)).toBe(false);
+    expect(latestPaidPayment(paidUp.payments)).toBe(topUp);
+    expect(latestPaidPayment([deposit])).toBe(deposit);
+    // A cancelled booking owes no top-up, whatever the field says.
+    expect(topUpDue({ ...confirmed, state: 'cancelled' })).toBe(false);
   });
 
   it('offers to try again when no payment page is open: it failed or lapsed, or none was made', () => {
