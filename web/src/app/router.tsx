@@ -110,6 +110,10 @@ export function createAppRouter(queryClient: QueryClient) {
             },
             { path: paths.account.quote.path, lazy: lazy(() => import('./routes/account/quote')) },
             {
+              path: paths.account.quoteCompare.path,
+              lazy: lazy(() => import('./routes/account/quote-compare')),
+            },
+            {
               path: paths.account.bookings.path,
               lazy: lazy(() => import('./routes/account/bookings')),
             },
@@ -152,6 +156,17 @@ export function createAppRouter(queryClient: QueryClient) {
             { path: paths.desk.booking.path, lazy: lazy(() => import('./routes/desk/booking')) },
             { path: paths.desk.quotes.path, lazy: lazy(() => import('./routes/desk/quotes')) },
             { path: paths.desk.quote.path, lazy: lazy(() => import('./routes/desk/quote')) },
+            {
+              // The planner in its revise mode, prefilled from the quote's latest version.
+              path: paths.desk.revise.path,
+              lazy: lazy(() => import('./routes/desk/revise/layout')),
+              children: [
+                {
+                  lazy: lazy(() => import('./routes/desk/revise/steps-frame')),
+                  children: plannerSteps(),
+                },
+              ],
+            },
             {
               path: paths.desk.workshop.path,
               lazy: lazy(() => import('./routes/desk/workshop')),

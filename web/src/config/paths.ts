@@ -42,6 +42,12 @@ export const paths = {
       path: '/account/quotes/:quoteId',
       getHref: (quoteId: string) => `/account/quotes/${encodeURIComponent(quoteId)}`,
     },
+    /** A revised version beside the one before it, to accept or decline. */
+    quoteCompare: {
+      path: '/account/quotes/:quoteId/versions/:versionNumber/compare',
+      getHref: (quoteId: string, versionNumber: number) =>
+        `/account/quotes/${encodeURIComponent(quoteId)}/versions/${versionNumber}/compare`,
+    },
     bookings: { path: '/account/bookings', getHref: () => '/account/bookings' },
     booking: {
       path: '/account/bookings/:bookingId',
@@ -74,6 +80,14 @@ export const paths = {
     quote: {
       path: '/desk/quotes/:quoteId',
       getHref: (quoteId: string) => `/desk/quotes/${encodeURIComponent(quoteId)}`,
+    },
+    /** The planner revising a quote: its steps under "/desk/quotes/:quoteId/revise/". */
+    revise: {
+      path: '/desk/quotes/:quoteId/revise',
+      getHref: (quoteId: string) => `/desk/quotes/${encodeURIComponent(quoteId)}/revise`,
+      /** One step of the revision: "/desk/quotes/…/revise/review". */
+      step: (quoteId: string, step: string) =>
+        `/desk/quotes/${encodeURIComponent(quoteId)}/revise/${step}`,
     },
     /** The day board: bays as columns, one day (or a week) of working time. */
     board: {

@@ -18,6 +18,8 @@ function quantityText(line: PricedLine): string {
     return `${Number.isInteger(hours) ? hours : hours.toFixed(2).replace(/0$/, '')} h`;
   }
   if (line.kind === 'bundle-discount' && line.percent !== undefined) return `${line.percent} %`;
+  // The workshop's own discount is an amount, not a count.
+  if (line.kind === 'workshop-discount') return '';
   return line.quantity !== undefined ? String(line.quantity) : '';
 }
 
@@ -76,7 +78,16 @@ export function PriceBreakdown({ price, validUntilDate, caption = 'Price, line b
                   )}
                 </TableCell>
                 <TableCell sx={money}>{quantityText(line)}</TableCell>
-                <TableCell sx={money}>{formatCents(line.amountCents)}</TableCell>
+                <TableCell
+                  sx={{
+                    ...money,
+                    ...(line.kind === 'workshop-discount' || line.kind === 'bundle-discount'
+                      ? { color: 'success.dark', fontWeight: 500 }
+                      : {}),
+                  }}
+                >
+                  {formatCents(line.amountCents)}
+                </TableCell>
               </TableRow>
             ))}
           </TableBody>

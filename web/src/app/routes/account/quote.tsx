@@ -57,8 +57,10 @@ export default function MyQuoteRoute() {
       </>
     );
   }
-  const latestBookable =
-    [...quote.data.versions].sort((a, b) => b.number - a.number)[0]?.bookable ?? false;
+  const latest = [...quote.data.versions].sort((a, b) => b.number - a.number)[0];
+  const latestBookable = latest?.bookable ?? false;
+  // A revision from the workshop waiting for an answer: compared with the version before it.
+  const openRevision = latest && latest.number > 1 && latest.state === 'sent' ? latest : null;
   const bookHref = paths.plan.book.getHref(quote.data.id);
   const justSaved = savedFromPlanner(location.state);
   return (
@@ -87,6 +89,25 @@ export default function MyQuoteRoute() {
           {latestBookable
             ? 'Book a time in the workshop now, or come back to it any time before the prices run out.'
             : 'You will find it under My quotes.'}
+        </Alert>
+      )}
+      {openRevision && (
+        <Alert
+          severity="info"
+          sx={{ mb: 3 }}
+          action={
+            <Button
+              color="inherit"
+              component={RouterLink}
+              to={paths.account.quoteCompare.getHref(quote.data.id, openRevision.number)}
+            >
+              Compare versions
+            </Button>
+          }
+        >
+          <AlertTitle>The workshop revised this quote</AlertTitle>
+          Version {openRevision.number} replaces version {openRevision.number - 1}. See what changed
+          side by side, then accept or decline it.
         </Alert>
       )}
       <QuoteDetail

@@ -12,6 +12,12 @@ import { warmSession } from '@/app/warm-session';
 import { quotesQueryOptions } from '@/features/quotes/api/get-quotes';
 import { QuoteList } from '@/features/quotes/components/quote-list';
 import { isApiError } from '@/lib/api-client';
+import type { QuoteSummary } from '@/types/api';
+
+/** A revision the workshop sent that waits for the customer's answer. */
+function awaitsAnswerToRevision(quote: QuoteSummary): boolean {
+  return quote.latestVersion.state === 'sent' && quote.latestVersion.number > 1;
+}
 
 export const clientLoader = (queryClient: QueryClient) => async () => {
   const user = await warmSession(queryClient);
@@ -56,7 +62,16 @@ export default function MyQuotesRoute() {
       ) : (
         <QuoteList
           quotes={items}
-          hrefFor={(quote) => paths.account.quote.getHref(quote.id)}
+          hrefFor={(quote) =>
+            awaitsAnswerToRevision(quote)
+              ? paths.account.quoteCompare.getHref(quote.id, quote.latestVersion.number)
+              : paths.account.quote.getHref(quote.id)
+          }
+          noteFor={(quote) =>
+            awaitsAnswerToRevision(quote)
+              ? `Revised to version ${quote.latestVersion.number}: compare and answer`
+              : null
+          }
           aria-label="My quotes"
         />
       )}

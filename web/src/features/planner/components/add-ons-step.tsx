@@ -18,7 +18,13 @@ import { packageItems, toPackage } from '../forms/build';
 import { serviceAttributes } from '../forms/product-text';
 import { usePlanner } from '../hooks/use-planner';
 import { ChoiceCard } from './choice-card';
-import { OptionsError, OptionsLoading, UnsuitableOptions, isSelectable } from './options-state';
+import {
+  OptionsError,
+  OptionsLoading,
+  StockNote,
+  UnsuitableOptions,
+  isSelectable,
+} from './options-state';
 import { PlannerStep } from './planner-step';
 
 /** Charged by the workshop's policy for every wheel and tyre: never chosen as a line. */
@@ -137,6 +143,7 @@ function AddOnList({
               details={
                 <>
                   {option.product.description || option.product.brand}
+                  <StockNote product={option.product} />
                   {ownVerdict && (
                     <Box component="span" sx={{ display: 'block', mt: 0.5 }}>
                       {option.summary}

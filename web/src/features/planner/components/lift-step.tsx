@@ -14,6 +14,7 @@ import { ChoiceCard } from './choice-card';
 import {
   OptionsError,
   OptionsLoading,
+  StockNote,
   UnsuitableOptions,
   isSelectable,
   summaryWithoutVerdict,
@@ -104,6 +105,7 @@ export function LiftStep() {
                 details={
                   <>
                     {option.product.brand} · {kitSpecText(option.product)}
+                    <StockNote product={option.product} />
                     {option.verdict !== 'ok' && (
                       <Box component="span" sx={{ display: 'block', mt: 0.5 }}>
                         {summaryWithoutVerdict(option)}

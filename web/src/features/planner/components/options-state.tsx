@@ -8,7 +8,9 @@ import Skeleton from '@mui/material/Skeleton';
 import Typography from '@mui/material/Typography';
 import ExpandMore from '@mui/icons-material/ExpandMore';
 import { isApiError } from '@/lib/api-client';
-import type { PlannerOption } from '@/types/api';
+import type { PlannerOption, Product } from '@/types/api';
+import { availabilityText } from '../forms/product-text';
+import { usePlanner } from '../hooks/use-planner';
 
 /** Placeholder cards while the options load, announced once. */
 export function OptionsLoading({ label }: { label: string }) {
@@ -84,4 +86,31 @@ export function summaryWithoutVerdict(option: PlannerOption): string {
 
 export function isSelectable(option: PlannerOption): boolean {
   return option.verdict !== 'does-not-fit';
+}
+
+/**
+ * Stock on the shelf or the lead time, for the front desk (walk-in quotes and revisions) choosing
+ * a part; the customer's own planner leaves it out.
+ */
+export function StockNote({
+  product,
+}: {
+  product: Pick<Product, 'kind' | 'stockQty' | 'leadDays'>;
+}) {
+  const { config } = usePlanner();
+  const text = config.mode === 'customer' ? null : availabilityText(product);
+  if (!text) return null;
+  return (
+    <Box
+      component="span"
+      sx={{
+        display: 'block',
+        mt: 0.5,
+        fontWeight: 500,
+        color: product.stockQty > 0 ? 'success.dark' : 'warning.dark',
+      }}
+    >
+      {text}
+    </Box>
+  );
 }

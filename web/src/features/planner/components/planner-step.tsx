@@ -79,7 +79,9 @@ export function PlannerStep({
 
   return (
     <Box component="section" aria-labelledby={`planner-step-${step}`}>
-      <DocumentTitle title={`${stepTitle(step)} · Plan your build`} />
+      <DocumentTitle
+        title={`${stepTitle(step)} · ${config.mode === 'revise' ? 'Revise the quote' : 'Plan your build'}`}
+      />
       <PlannerProgress step={step} />
       <Box
         sx={{

@@ -26,6 +26,7 @@ import { toPackage, useLabels } from '../forms/build';
 import { usePlanner } from '../hooks/use-planner';
 import { PhotoAttachments } from './photo-attachments';
 import { PlannerStep } from './planner-step';
+import { ReviseReviewStep } from './revise-review-step';
 
 /** An API error in words: its message, then every field message. */
 function errorText(error: unknown): string {
@@ -46,8 +47,14 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
-/** Step 6: the fit report, the price line by line, photos, and "Save quote". */
+/** Step 6: in a revision, the desk's terms and "Save and send"; otherwise "Save quote". */
 export function ReviewStep() {
+  const { config } = usePlanner();
+  return config.mode === 'revise' ? <ReviseReviewStep /> : <SaveReviewStep />;
+}
+
+/** Step 6: the fit report, the price line by line, photos, and "Save quote". */
+function SaveReviewStep() {
   const { build, config, stepHref, discard } = usePlanner();
   const navigate = useNavigate();
   const body = toPackage(build);

@@ -18,12 +18,14 @@ export function StartAgainButton() {
   const titleId = useId();
   const textId = useId();
 
+  const revising = config.mode === 'revise';
   const confirm = () => {
     // Photos not saved with a quote would only wait on the server: remove them too.
     for (const photo of build.photos) void deleteUpload(photo.id).catch(() => undefined);
     startAgain({ keepCustomer: config.mode === 'walk-in' });
     setOpen(false);
-    void navigate(stepHref('vehicle'));
+    // A revision starts again from the saved version, which opens on the review.
+    void navigate(stepHref(revising ? 'review' : 'vehicle'));
   };
 
   return (
@@ -35,7 +37,7 @@ export function StartAgainButton() {
         onClick={() => setOpen(true)}
         sx={{ color: 'text.secondary' }}
       >
-        Start again
+        {revising ? 'Undo my changes' : 'Start again'}
       </Button>
       <Dialog
         open={open}
@@ -43,17 +45,20 @@ export function StartAgainButton() {
         aria-labelledby={titleId}
         aria-describedby={textId}
       >
-        <DialogTitle id={titleId}>Start again?</DialogTitle>
+        <DialogTitle id={titleId}>{revising ? 'Undo every change?' : 'Start again?'}</DialogTitle>
         <DialogContent>
           <DialogContentText id={textId}>
-            This clears the vehicle, how you use it and every part you chose, so you can plan a new
-            build from the first step.
+            {revising
+              ? `This puts back version ${build.revision?.baseVersionNumber ?? ''} as it was saved: its parts, quantities and labour, with no discount and no reason yet.`
+              : 'This clears the vehicle, how you use it and every part you chose, so you can plan a new build from the first step.'}
           </DialogContentText>
         </DialogContent>
         <DialogActions>
-          <Button onClick={() => setOpen(false)}>Keep my build</Button>
+          <Button onClick={() => setOpen(false)}>
+            {revising ? 'Keep my changes' : 'Keep my build'}
+          </Button>
           <Button variant="contained" color="error" onClick={confirm}>
-            Clear the build
+            {revising ? 'Undo the changes' : 'Clear the build'}
           </Button>
         </DialogActions>
       </Dialog>

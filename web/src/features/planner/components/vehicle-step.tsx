@@ -92,8 +92,42 @@ function ownVehicleDetails(vehicle: CustomerVehicle): string {
     .join(' · ');
 }
 
-/** Step 1: one of the customer's own vehicles, or make → model → year. */
+/**
+ * Step 1 of a revision: the vehicle is the quote's own (a revision prices the same vehicle; another
+ * model is a new quote), so it is shown, not chosen.
+ */
+function RevisedVehicleStep() {
+  const { build } = usePlanner();
+  return (
+    <PlannerStep
+      step="vehicle"
+      lead="A revision is for the same vehicle. For another model, make a new walk-in quote."
+    >
+      <Card sx={{ bgcolor: 'background.paper' }}>
+        <CardContent>
+          <Typography sx={{ fontWeight: 500 }}>
+            {build.vehicleName}
+            {build.year ? `, ${build.year}` : ''}
+          </Typography>
+          {build.customer && (
+            <Typography color="text.secondary">
+              {build.customer.name}'s vehicle, as on quote {build.revision?.reference}
+            </Typography>
+          )}
+        </CardContent>
+      </Card>
+    </PlannerStep>
+  );
+}
+
+/** Step 1: the vehicle (shown as it is in a revision, chosen otherwise). */
 export function VehicleStep() {
+  const { config } = usePlanner();
+  return config.mode === 'revise' ? <RevisedVehicleStep /> : <ChooseVehicleStep />;
+}
+
+/** Step 1: one of the customer's own vehicles, or make → model → year. */
+function ChooseVehicleStep() {
   const { build, config, setVehicle } = usePlanner();
   const ownVehiclesAllowed = config.mode === 'customer' && config.viewerRole === 'customer';
   const myVehicles = useQuery({ ...myVehiclesQueryOptions(), enabled: ownVehiclesAllowed });

@@ -18,6 +18,7 @@ import { ChoiceCard } from './choice-card';
 import {
   OptionsError,
   OptionsLoading,
+  StockNote,
   UnsuitableOptions,
   isSelectable,
   summaryWithoutVerdict,
@@ -103,6 +104,7 @@ function PartQuestion({
                 <>
                   {option.product.brand} ·{' '}
                   {kind === 'wheel' ? wheelSpecText(option.product) : tyreSpecText(option.product)}
+                  <StockNote product={option.product} />
                   <Box component="span" sx={{ display: 'block', mt: 0.5, color: 'text.primary' }}>
                     {kind === 'wheel'
                       ? wheelMetricsText(option.metrics)

@@ -2,6 +2,7 @@ import * as yup from 'yup';
 import type {
   AdditionRole,
   ProductKind,
+  Quote,
   QuotePackageItem,
   QuotePackageRequest,
   UploadKind,
@@ -19,6 +20,20 @@ export const BUILD_VERSION = 1;
 export const PLANNER_STORAGE_KEY = 'liftwright.build.v1';
 /** The front desk's walk-in quote: kept apart, so a shared counter never mixes the two. */
 export const WALK_IN_STORAGE_KEY = 'liftwright.walk-in-build.v1';
+
+/**
+ * The front desk's revision of one quote: a key per quote, apart from the customer's planner and
+ * the walk-in quote, so revising never touches either of those builds.
+ */
+export function reviseStorageKey(quoteId: string): string {
+  return `liftwright.revise-build.v1.${quoteId}`;
+}
+
+/**
+ * Who the planner works for: the customer's own planner, the front desk quoting for a walk-in
+ * customer, or the front desk revising a saved quote (a new version of it).
+ */
+export type PlannerMode = 'customer' | 'walk-in' | 'revise';
 
 export const plannerSteps = [
   { id: 'vehicle', title: 'Your vehicle' },
@@ -42,9 +57,7 @@ export const bookStep = { id: 'book', title: 'Book a time' } as const;
 export type ProgressStepId = StepId | typeof bookStep.id;
 
 /** The steps the progress shows: the walk-in quote at the desk ends with the review. */
-export function progressSteps(
-  mode: 'customer' | 'walk-in',
-): readonly { id: ProgressStepId; title: string }[] {
+export function progressSteps(mode: PlannerMode): readonly { id: ProgressStepId; title: string }[] {
   return mode === 'customer' ? [...plannerSteps, bookStep] : plannerSteps;
 }
 
@@ -61,6 +74,9 @@ export const useLabels: Record<VehicleUse, string> = {
 
 export const MAX_CONSTANT_LOAD_KG = 3000;
 
+/** Most workshop minutes per unit the desk may set on a line (a whole day, as the API's limit). */
+export const MAX_LABOUR_MINUTES = 1440;
+
 /** Kinds a package holds at most one of; the planner replaces rather than adds them. */
 export const singleKinds: readonly ProductKind[] = ['suspension-kit', 'wheel', 'tyre'];
 
@@ -76,6 +92,26 @@ export interface BuildItem {
   requiredFor: AdditionRole | null;
   /** The fit report's reason, kept with a required item. */
   reason: string | null;
+  /**
+   * Workshop minutes per unit as saved on the quote (or the catalogue's, for a product the
+   * revision adds); the default of the desk's labour override. Absent in the customer's build.
+   */
+  labourMinutes?: number;
+}
+
+/** What a revision adds to the build: which quote and version it starts from, and the desk's terms. */
+export interface RevisionDraft {
+  quoteId: string;
+  /** "Q-000123". */
+  reference: string;
+  /** The version the revision was prefilled from (the latest when it was opened). */
+  baseVersionNumber: number;
+  /** Per-unit labour minutes the desk set, by product id; absent: the saved value. */
+  labourOverrides: Record<string, number>;
+  /** The workshop discount as typed, in dollars ("50" or "49.95"); empty for none. */
+  discountText: string;
+  /** Why the quote is revised, as typed so far. */
+  reason: string;
 }
 
 export interface BuildPhoto {
@@ -108,6 +144,8 @@ export interface PlannerBuild {
   /** Steps the user has finished with "Next". */
   completed: StepId[];
   customer: BuildCustomer | null;
+  /** Only in the desk's revision of a quote. */
+  revision?: RevisionDraft;
 }
 
 export function emptyBuild(): PlannerBuild {
@@ -173,6 +211,7 @@ const storedBuildSchema = yup
           priceCents: yup.number().integer().min(0).required(),
           requiredFor: yup.string().oneOf(additionRoles).nullable().defined(),
           reason: yup.string().max(1000).nullable().defined(),
+          labourMinutes: yup.number().integer().min(0).max(MAX_LABOUR_MINUTES).optional(),
         }),
       )
       .max(30)
@@ -199,23 +238,104 @@ const storedBuildSchema = yup
       })
       .nullable()
       .defined(),
+    revision: yup
+      .object({
+        quoteId: uuid().required(),
+        reference: yup.string().max(40).required(),
+        baseVersionNumber: yup.number().integer().min(1).required(),
+        labourOverrides: yup
+          .mixed<Record<string, number>>()
+          .test(
+            'minutes-by-product',
+            'must map product ids to whole minutes',
+            (value) =>
+              typeof value === 'object' &&
+              value !== null &&
+              !Array.isArray(value) &&
+              Object.values(value).every(
+                (minutes) =>
+                  Number.isInteger(minutes) && minutes >= 0 && minutes <= MAX_LABOUR_MINUTES,
+              ),
+          )
+          .required(),
+        discountText: yup.string().max(20).defined(),
+        reason: yup.string().max(2000).defined(),
+      })
+      .default(undefined)
+      .optional(),
   })
   .noUnknown();
 
-/** Reads a stored build; a missing, unreadable or out-of-date one gives an empty build. */
-export function loadBuild(storageKey: string): PlannerBuild {
+/** Reads a stored build; null when there is none, or it is unreadable or out of date. */
+export function loadStoredBuild(storageKey: string): PlannerBuild | null {
   try {
     const text = window.localStorage.getItem(storageKey);
-    if (!text) return emptyBuild();
+    if (!text) return null;
     const parsed: unknown = JSON.parse(text);
-    if (!storedBuildSchema.isValidSync(parsed, { strict: true })) return emptyBuild();
+    if (!storedBuildSchema.isValidSync(parsed, { strict: true })) return null;
     const build = parsed as PlannerBuild;
     // Product ids are unique in a package (the API refuses repeats).
     const ids = new Set(build.items.map((item) => item.productId));
-    return ids.size === build.items.length ? build : emptyBuild();
+    return ids.size === build.items.length ? build : null;
   } catch {
-    return emptyBuild();
+    return null;
   }
+}
+
+/** Reads a stored build; a missing, unreadable or out-of-date one gives an empty build. */
+export function loadBuild(storageKey: string): PlannerBuild {
+  return loadStoredBuild(storageKey) ?? emptyBuild();
+}
+
+/** The latest version of a quote (versions come oldest first, but the order is not relied on). */
+function latestVersionOf(quote: Quote) {
+  return [...quote.versions].sort((a, b) => b.number - a.number)[0];
+}
+
+/**
+ * The desk's revision of a quote, prefilled from its latest version: the same vehicle, uses and
+ * load, every product line still in the catalogue with its quantity and its saved labour
+ * minutes, and every step done (the revision opens on the review). Lines whose product has been
+ * deleted since cannot be quoted again and are left out.
+ */
+export function buildFromQuote(quote: Quote): PlannerBuild {
+  const version = latestVersionOf(quote);
+  const items: BuildItem[] = (version?.lines ?? [])
+    .filter((line): line is typeof line & { productId: string } => line.productId !== null)
+    .sort((a, b) => a.position - b.position)
+    .map((line) => ({
+      productId: line.productId,
+      kind: line.kind,
+      quantity: line.quantity,
+      name: line.name,
+      brand: line.brand,
+      priceCents: line.unitPriceCents,
+      requiredFor: null,
+      reason: null,
+      labourMinutes: line.labourMinutes,
+    }));
+  const wheelLine = items.find((item) => item.kind === 'wheel' || item.kind === 'tyre');
+  return {
+    ...emptyBuild(),
+    vehicleModelId: quote.vehicle.vehicleModelId,
+    vehicleName: quote.vehicle.name,
+    year: quote.vehicle.year,
+    customerVehicleId: quote.vehicle.customerVehicle?.id ?? null,
+    uses: [...quote.uses],
+    constantLoadKg: quote.constantLoadKg,
+    wheelQuantity: wheelLine?.quantity === 5 ? 5 : 4,
+    items,
+    completed: [...stepIds],
+    customer: { id: quote.customer.id, name: quote.customer.name, email: quote.customer.email },
+    revision: {
+      quoteId: quote.id,
+      reference: quote.reference,
+      baseVersionNumber: version?.number ?? 1,
+      labourOverrides: {},
+      discountText: '',
+      reason: '',
+    },
+  };
 }
 
 export function saveBuild(storageKey: string, build: PlannerBuild): void {

@@ -86,3 +86,18 @@ export function wheelMetricsText(metrics: PlannerOptionMetrics): string {
       : `the wheel track ${metrics.trackChangeMm > 0 ? 'widens' : 'narrows'} by ${formatOneDecimal(Math.abs(metrics.trackChangeMm))} mm`;
   return `With it, ${track}`;
 }
+
+/**
+ * Whether the workshop has the product on the shelf, for the front desk choosing parts: "In
+ * stock (4)", or how long ordering it in takes. Services are not stocked: null.
+ */
+export function availabilityText(
+  product: Pick<Product, 'kind' | 'stockQty' | 'leadDays'>,
+): string | null {
+  if (product.kind === 'service') return null;
+  if (product.stockQty > 0) return `In stock (${formatWholeNumber(product.stockQty)})`;
+  if (product.leadDays > 0) {
+    return `Out of stock: ordered in, about ${product.leadDays} ${product.leadDays === 1 ? 'day' : 'days'}`;
+  }
+  return 'Out of stock';
+}

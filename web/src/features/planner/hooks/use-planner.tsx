@@ -9,32 +9,53 @@ import {
   type ReactNode,
 } from 'react';
 import { useLocation } from 'react-router';
-import type { AdditionRole, PlannerOption, ProductKind, Role, VehicleUse } from '@/types/api';
+import type {
+  AdditionRole,
+  PlannerOption,
+  ProductKind,
+  Quote,
+  Role,
+  VehicleUse,
+} from '@/types/api';
 import {
   discardStoredBuild,
   emptyBuild,
-  loadBuild,
+  loadStoredBuild,
   saveBuild,
   type BuildCustomer,
   type BuildItem,
   type BuildPhoto,
   type PlannerBuild,
+  type PlannerMode,
+  type RevisionDraft,
   type StepId,
 } from '../forms/build';
 
 export interface PlannerConfig {
   /** localStorage key of this build. */
   storageKey: string;
-  /** Where the steps live: "/plan" or "/desk/walk-in". */
+  /** Where the steps live: "/plan", "/desk/walk-in" or "/desk/quotes/:id/revise". */
   basePath: string;
-  /** A customer's own planner, or the front desk quoting for a walk-in customer. */
-  mode: 'customer' | 'walk-in';
+  /**
+   * A customer's own planner, the front desk quoting for a walk-in customer, or the front desk
+   * revising a saved quote.
+   */
+  mode: PlannerMode;
   /** The signed-in user's role; null for a visitor. */
   viewerRole: Role | null;
   /** Where "Back" on the first step goes (the walk-in's customer step); none when absent. */
   firstStepBackHref?: string;
   /** Walk-in quotes: where the customer is chosen; the steps wait until one is. */
   customerStepHref?: string;
+  /**
+   * The build to start from when nothing usable is stored (a revision starts from the quote's
+   * latest version); "Start again" returns to it. Without it, an empty build.
+   */
+  initialBuild?: PlannerBuild;
+  /** Whether a stored build may be resumed (a revision of an older version may not). */
+  acceptStored?: (stored: PlannerBuild) => boolean;
+  /** Revisions: the quote being revised, as it stands (its latest version is the one replaced). */
+  revisedQuote?: Quote;
 }
 
 export interface VehicleChoice {
@@ -59,6 +80,12 @@ interface PlannerContextValue {
   chooseSingle: (kind: ProductKind, option: PlannerOption | null) => void;
   setWheelQuantity: (quantity: 4 | 5) => void;
   setAddOn: (option: PlannerOption, included: boolean, quantity?: number) => void;
+  /** Revisions: the quantity of one line, as the desk set it on the review. */
+  setItemQuantity: (productId: string, quantity: number) => void;
+  /** Revisions: the desk's labour overrides, discount and reason. */
+  setRevisionTerms: (
+    terms: Pick<RevisionDraft, 'labourOverrides' | 'discountText' | 'reason'>,
+  ) => void;
   /** Adds a product the fit report says the package needs, marked as such. */
   includeRequired: (option: PlannerOption, role: AdditionRole, reason: string) => void;
   addPhoto: (photo: BuildPhoto) => void;
@@ -83,6 +110,7 @@ function toItem(option: PlannerOption, quantity: number): BuildItem {
     priceCents: option.product.priceCents,
     requiredFor: null,
     reason: null,
+    labourMinutes: option.product.labourMinutes,
   };
 }
 
@@ -96,7 +124,11 @@ export function PlannerProvider({
   config: PlannerConfig;
   children: ReactNode;
 }) {
-  const [build, setBuild] = useState<PlannerBuild>(() => loadBuild(config.storageKey));
+  const [build, setBuild] = useState<PlannerBuild>(() => {
+    const stored = loadStoredBuild(config.storageKey);
+    if (stored && (config.acceptStored?.(stored) ?? true)) return stored;
+    return config.initialBuild ?? emptyBuild();
+  });
   const { key } = useLocation();
   const [openedOnKey] = useState(key);
   const discarded = useRef(false);
@@ -162,6 +194,27 @@ export function PlannerProvider({
             items: included ? [...others, toItem(option, quantity)] : others,
           };
         }),
+      setItemQuantity: (productId, quantity) =>
+        update((current) => {
+          const item = current.items.find((candidate) => candidate.productId === productId);
+          if (!item || item.quantity === quantity) return current;
+          return {
+            ...current,
+            items: current.items.map((candidate) =>
+              candidate.productId === productId ? { ...candidate, quantity } : candidate,
+            ),
+          };
+        }),
+      setRevisionTerms: (terms) =>
+        update((current) => {
+          if (!current.revision) return current;
+          const same =
+            current.revision.discountText === terms.discountText &&
+            current.revision.reason === terms.reason &&
+            JSON.stringify(current.revision.labourOverrides) ===
+              JSON.stringify(terms.labourOverrides);
+          return same ? current : { ...current, revision: { ...current.revision, ...terms } };
+        }),
       includeRequired: (option, role, reason) =>
         update((current) => {
           if (current.items.some((item) => item.productId === option.product.id)) return current;
@@ -185,10 +238,14 @@ export function PlannerProvider({
         ),
       setCustomer: (customer) => update((current) => ({ ...current, customer })),
       startAgain: (options) =>
-        update((current) => ({
-          ...emptyBuild(),
-          customer: options?.keepCustomer ? current.customer : null,
-        })),
+        update((current) =>
+          config.initialBuild
+            ? config.initialBuild
+            : {
+                ...emptyBuild(),
+                customer: options?.keepCustomer ? current.customer : null,
+              },
+        ),
       discard: () => {
         discarded.current = true;
         discardStoredBuild(config.storageKey);

@@ -14,12 +14,14 @@ interface Props {
   hrefFor: (quote: QuoteSummary) => string;
   /** Staff lists name the customer on each quote. */
   showCustomer?: boolean;
+  /** A line to draw the eye on a quote (e.g. "Revised: compare and answer"), or null. */
+  noteFor?: (quote: QuoteSummary) => string | null;
   /** Names the list for assistive technology. */
   'aria-label': string;
 }
 
 /** Quotes as cards, newest first: reference, vehicle, latest state, total and valid-until. */
-export function QuoteList({ quotes, hrefFor, showCustomer = false, ...aria }: Props) {
+export function QuoteList({ quotes, hrefFor, showCustomer = false, noteFor, ...aria }: Props) {
   return (
     <Box
       component="ul"
@@ -52,6 +54,11 @@ export function QuoteList({ quotes, hrefFor, showCustomer = false, ...aria }: Pr
                   <QuoteStateChip state={quote.latestVersion.state} />
                 </Box>
                 <Typography sx={{ mt: 0.5 }}>{quote.vehicleName}</Typography>
+                {noteFor?.(quote) && (
+                  <Typography sx={{ mt: 0.5, fontWeight: 500, color: 'info.dark' }}>
+                    {noteFor(quote)}
+                  </Typography>
+                )}
                 {showCustomer && (
                   <Typography variant="body2" color="text.secondary">
                     {quote.customer.name} · {quote.customer.email}
