@@ -775,6 +775,7 @@ export class BookingsService implements OnModuleInit {
         bayName: reservation.bay.name,
         bayKind: reservation.bay.kind,
         minutes: booking.plan.segments[index]?.minutes ?? 0,
+        work: [...(booking.plan.segments[index]?.descriptions ?? [])],
         start: zonedIso(reservation.startsAt.getTime(), timeZone),
         startUtc: utcIso(reservation.startsAt.getTime()),
         end: zonedIso(reservation.endsAt.getTime(), timeZone),
@@ -788,6 +789,9 @@ export class BookingsService implements OnModuleInit {
         totalCents: version.totalCents,
         depositCents: version.depositCents,
         vehicleName: vehicleName(quote.vehicleModel),
+        packageSummary: [
+          ...new Set(booking.plan.segments.flatMap((segment) => segment.descriptions)),
+        ].join(' · '),
         latestVersionNumber: latest.number,
         latestVersionState: effectiveState(latest, new Date(nowMs)),
       },

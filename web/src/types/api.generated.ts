@@ -2862,6 +2862,34 @@ export interface components {
     /** @enum {string} */
     BookingState:
       'held' | 'requested' | 'confirmed' | 'in-progress' | 'completed' | 'cancelled' | 'expired';
+    BookingSegmentResponse: {
+      /** Format: uuid */
+      bayId: string;
+      /** @example Hoist 1 */
+      bayName: string;
+      bayKind: components['schemas']['BayKind'];
+      /** @description Working minutes in the bay (the stay may be longer: breaks, nights) */
+      minutes: number;
+      /**
+       * @description In the workshop's zone
+       * @example 2026-12-03T07:30:00+11:00
+       */
+      start: string;
+      /** @example 2026-12-02T20:30:00.000Z */
+      startUtc: string;
+      /** @example 2026-12-03T11:00:00+11:00 */
+      end: string;
+      /** @example 2026-12-03T00:00:00.000Z */
+      endUtc: string;
+      /**
+       * @description The work done in this bay, in plain words
+       * @example [
+       *       "Fit lift kit",
+       *       "Fitting and balancing, 4 wheels"
+       *     ]
+       */
+      work: string[];
+    };
     BookingQuoteSummaryResponse: {
       /** Format: uuid */
       id: string;
@@ -2876,6 +2904,11 @@ export interface components {
       depositCents: number;
       /** @example Oskerra Barrow GLX dual cab */
       vehicleName: string;
+      /**
+       * @description The package in a line: the work of every segment
+       * @example Fit lift kit · Fitting and balancing, 4 wheels · Wheel alignment
+       */
+      packageSummary: string;
       /** @description The quote's latest version (a revision may follow the booked one) */
       latestVersionNumber: number;
       latestVersionState: components['schemas']['QuoteVersionState'];
@@ -2990,7 +3023,7 @@ export interface components {
       endUtc: string;
       /** @example Australia/Sydney */
       timeZone: string;
-      segments: components['schemas']['PlannedSegmentResponse'][];
+      segments: components['schemas']['BookingSegmentResponse'][];
       quote: components['schemas']['BookingQuoteSummaryResponse'];
       customer: components['schemas']['BookingCustomerResponse'];
       /**

@@ -180,6 +180,8 @@ export type JobSegment = Schemas['JobSegmentResponse'];
 export type JobPlan = Schemas['JobPlanResponse'];
 /** One stay in one bay, in UTC and in the workshop's zone. */
 export type PlannedSegment = Schemas['PlannedSegmentResponse'];
+/** A booked segment: the bay's time and the work done in it. */
+export type BookingSegment = Schemas['BookingSegmentResponse'];
 /** One start time on offer, with every segment it books. */
 export type StartOption = Schemas['StartOptionResponse'];
 export type AvailabilityDay = Schemas['AvailabilityDayResponse'];

@@ -38,6 +38,16 @@ export class PlannedSegmentResponse {
   endUtc!: string;
 }
 
+/** A booked segment: the bay's time and the work done in it. */
+export class BookingSegmentResponse extends PlannedSegmentResponse {
+  @ApiProperty({
+    type: [String],
+    example: ['Fit lift kit', 'Fitting and balancing, 4 wheels'],
+    description: 'The work done in this bay, in plain words',
+  })
+  work!: string[];
+}
+
 export class BookingQuoteSummaryResponse {
   @ApiProperty({ format: 'uuid' })
   id!: string;
@@ -59,6 +69,12 @@ export class BookingQuoteSummaryResponse {
 
   @ApiProperty({ example: 'Oskerra Barrow GLX dual cab' })
   vehicleName!: string;
+
+  @ApiProperty({
+    example: 'Fit lift kit · Fitting and balancing, 4 wheels · Wheel alignment',
+    description: 'The package in a line: the work of every segment',
+  })
+  packageSummary!: string;
 
   @ApiProperty({ description: "The quote's latest version (a revision may follow the booked one)" })
   latestVersionNumber!: number;
@@ -149,8 +165,8 @@ export class BookingResponse {
   @ApiProperty({ example: 'Australia/Sydney' })
   timeZone!: string;
 
-  @ApiProperty({ type: [PlannedSegmentResponse] })
-  segments!: PlannedSegmentResponse[];
+  @ApiProperty({ type: [BookingSegmentResponse] })
+  segments!: BookingSegmentResponse[];
 
   @ApiProperty({ type: BookingQuoteSummaryResponse })
   quote!: BookingQuoteSummaryResponse;

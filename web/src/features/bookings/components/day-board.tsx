@@ -67,6 +67,7 @@ function blockLabel(block: PlacedBlock, timeZone: string): string {
     booking.quote.vehicleName,
     `quote ${booking.quote.reference}`,
     `${segment.bayName} ${formatLocalRange(segment.startUtc, segment.endUtc, timeZone)}`,
+    ...(segment.work.length > 0 ? [`work: ${segment.work.join(', ')}`] : []),
   ];
   if (booking.state === 'held' && booking.holdExpiresAt) {
     parts.push(`held until ${formatLocalTime(booking.holdExpiresAt, timeZone)}`);
@@ -156,7 +157,12 @@ function BoardBlock({
           {booking.quote.reference} · {stateLine}
         </Box>
       )}
-      {box.lines >= 4 && (
+      {box.lines >= 4 && segment.work.length > 0 && (
+        <Box component="span" sx={{ ...lineSx(), color: 'text.secondary' }}>
+          {segment.work.join(' · ')}
+        </Box>
+      )}
+      {box.lines >= (segment.work.length > 0 ? 5 : 4) && (
         <Box component="span" sx={{ ...lineSx(), color: 'text.secondary' }}>
           {formatLocalRange(segment.startUtc, segment.endUtc, timeZone)}
         </Box>

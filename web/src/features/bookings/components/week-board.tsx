@@ -112,6 +112,11 @@ export function WeekBoard({ setup, bookings, date, today, hrefFor, dayHref }: Pr
                         <Box component="span" sx={{ display: 'block' }}>
                           {booking.quote.vehicleName}
                         </Box>
+                        {booking.quote.packageSummary && (
+                          <Box component="span" sx={{ display: 'block', color: 'text.secondary' }}>
+                            {booking.quote.packageSummary}
+                          </Box>
+                        )}
                         <Box component="span" sx={{ display: 'block', color: 'text.secondary' }}>
                           {bayNames.join(', ')} · {booking.quote.reference} ·{' '}
                           {bookingStateLabels[booking.state]}

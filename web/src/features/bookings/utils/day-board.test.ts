@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Bay, Booking, OpeningHoursEntry, PlannedSegment } from '@/types/api';
+import type { Bay, Booking, OpeningHoursEntry, BookingSegment } from '@/types/api';
 import {
   BLOCK_METRICS,
   BOARD_SCALE,
@@ -60,7 +60,7 @@ const align: Bay = {
 };
 const spare: Bay = { id: 'bay-spare', name: 'Hoist 2', kind: 'hoist', position: 3, active: false };
 
-function segment(bay: Bay, startUtc: string, endUtc: string): PlannedSegment {
+function segment(bay: Bay, startUtc: string, endUtc: string): BookingSegment {
   return {
     bayId: bay.id,
     bayName: bay.name,
@@ -70,10 +70,11 @@ function segment(bay: Bay, startUtc: string, endUtc: string): PlannedSegment {
     startUtc,
     end: endUtc,
     endUtc,
+    work: [`Work in ${bay.name}`],
   };
 }
 
-function booking(id: string, state: Booking['state'], segments: PlannedSegment[]): Booking {
+function booking(id: string, state: Booking['state'], segments: BookingSegment[]): Booking {
   return {
     id,
     reference: `B-${id}`,

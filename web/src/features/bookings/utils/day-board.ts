@@ -4,7 +4,7 @@ import type {
   Booking,
   BookingState,
   OpeningHoursEntry,
-  PlannedSegment,
+  BookingSegment,
   WorkshopSetup,
 } from '@/types/api';
 
@@ -226,7 +226,7 @@ function minutesOnDate(isoInstant: string, date: string, timeZone: string): numb
 /** One stay of a booking in one bay, placed on the window of one day. */
 export interface PlacedBlock {
   booking: Booking;
-  segment: PlannedSegment;
+  segment: BookingSegment;
   /** Minutes after the first row's start where the stay begins and ends, cut to the window. */
   fromMinute: number;
   toMinute: number;
