@@ -3,6 +3,11 @@ import { createTransport, type Transporter } from 'nodemailer';
 import { AppConfigService } from '../config/app-config.service';
 import type { MailContent, OutgoingMail } from './templates/mail-content';
 
+/** The longest the transport waits to connect, for the greeting and on a silent socket. */
+export const SMTP_CONNECTION_TIMEOUT_MS = 10_000;
+export const SMTP_GREETING_TIMEOUT_MS = 10_000;
+export const SMTP_SOCKET_TIMEOUT_MS = 30_000;
+
 /** Sends e-mail through the SMTP server named by SMTP_URL. */
 @Injectable()
 export class MailService implements OnApplicationShutdown {
@@ -10,7 +15,14 @@ export class MailService implements OnApplicationShutdown {
   private readonly transport: Transporter;
 
   constructor(private readonly config: AppConfigService) {
-    this.transport = createTransport(config.smtpUrl);
+    this.transport = createTransport({
+      url: config.smtpUrl,
+      // Bounded waits, so one slow server cannot hold a message past its outbox job's expiry
+      // (notifications.service.ts: the job would be handed out again while still being sent).
+      connectionTimeout: SMTP_CONNECTION_TIMEOUT_MS,
+      greetingTimeout: SMTP_GREETING_TIMEOUT_MS,
+      socketTimeout: SMTP_SOCKET_TIMEOUT_MS,
+    });
   }
 
   async send(to: string, content: MailContent): Promise<void> {

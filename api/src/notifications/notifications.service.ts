@@ -7,7 +7,12 @@ import {
 } from '@nestjs/common';
 import PgBoss from 'pg-boss';
 import { AppConfigService } from '../config/app-config.service';
-import { MailService } from '../mail/mail.service';
+import {
+  MailService,
+  SMTP_CONNECTION_TIMEOUT_MS,
+  SMTP_GREETING_TIMEOUT_MS,
+  SMTP_SOCKET_TIMEOUT_MS,
+} from '../mail/mail.service';
 import type { OutgoingMail } from '../mail/templates/mail-content';
 import { loadWorkshop } from '../workshop/workshop.service';
 import { bookingReference } from '../bookings/booking-states';
@@ -32,9 +37,16 @@ export interface QueuedMessage {
 
 /**
  * Messages fetched at a time. pg-boss's worker waits a polling interval between fetches even
- * when it found work, so one at a time would mean at most one message per interval.
+ * when it found work, so one at a time would mean at most one message per interval. A batch is
+ * sent one message after another, so the whole batch at the transport's longest wait per
+ * message must fit in a job's expiry (below), or a job still being sent would be handed out
+ * again and could go out twice.
  */
-const BATCH_SIZE = 100;
+const BATCH_SIZE = 10;
+const WORST_SEND_SECONDS =
+  (SMTP_CONNECTION_TIMEOUT_MS + SMTP_GREETING_TIMEOUT_MS + SMTP_SOCKET_TIMEOUT_MS) / 1000;
+/** A job's time to be sent before pg-boss takes it back: the whole batch at its worst, and half again. */
+export const JOB_EXPIRY_SECONDS = Math.ceil(BATCH_SIZE * WORST_SEND_SECONDS * 1.5);
 
 /** How long a completed or failed job stays in pg-boss's archive (and a repeat is still seen). */
 const ARCHIVE_DAYS = 30;
@@ -83,14 +95,17 @@ export class NotificationsService implements OnApplicationBootstrap, OnApplicati
   start(): Promise<void> {
     this.started ??= (async () => {
       await this.boss.start();
-      await this.boss.createQueue(CUSTOMER_MAIL_QUEUE, {
+      const queue: PgBoss.Queue = {
         name: CUSTOMER_MAIL_QUEUE,
         policy: 'standard',
         retryLimit: this.config.outboxRetryLimit,
         retryDelay: this.config.outboxRetryDelaySeconds,
         retryBackoff: true,
-        expireInSeconds: 120,
-      });
+        expireInSeconds: JOB_EXPIRY_SECONDS,
+      };
+      await this.boss.createQueue(CUSTOMER_MAIL_QUEUE, queue);
+      // createQueue leaves an existing queue as it was: these settings win on every start.
+      await this.boss.updateQueue(CUSTOMER_MAIL_QUEUE, queue);
       if (this.config.outboxWorker) {
         await this.boss.work<OutgoingMail>(
           CUSTOMER_MAIL_QUEUE,

@@ -1,5 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { mailDomainOf, outboxJobId, outboxMessageId, toKnexBindings } from './outbox-key';
+import {
+  mailDomainOf,
+  nameBasedUuid,
+  outboxJobId,
+  outboxMessageId,
+  toKnexBindings,
+} from './outbox-key';
 
 describe('outbox keys', () => {
   it('makes one job id per cause, a version 5 UUID', () => {
@@ -8,6 +14,12 @@ describe('outbox keys', () => {
     expect(outboxJobId('booking-moved:abc:2')).not.toBe(id);
     // Source: RFC 9562 §5.5 (version 5: version nibble 5, variant bits 10)
     expect(id).toMatch(/^[0-9a-f]{8}-[0-9a-f]{4}-5[0-9a-f]{3}-[89ab][0-9a-f]{3}-[0-9a-f]{12}$/);
+  });
+
+  it('computes version 5 UUIDs as the standard does', () => {
+    const dns = Buffer.from('6ba7b8109dad11d180b400c04fd430c8', 'hex');
+    // Source: RFC 9562 Appendix A.4 (UUIDv5 of "www.example.com" in the DNS namespace)
+    expect(nameBasedUuid(dns, 'www.example.com')).toBe('2ed6657d-e927-568b-95e1-2665a8aea6a2');
   });
 
   it('names the Message-ID after the job, on the workshop mail domain', () => {

@@ -8,7 +8,12 @@ import { createHash } from 'node:crypto';
 const NAMESPACE = Buffer.from('4b6f1d1e8a3c4f0e9b2a6c5d7e8f9a0b', 'hex');
 
 export function outboxJobId(causeKey: string): string {
-  const hash = createHash('sha1').update(NAMESPACE).update(causeKey, 'utf8').digest();
+  return nameBasedUuid(NAMESPACE, causeKey);
+}
+
+/** A version 5 UUID of `name` in the namespace (its 16 bytes), RFC 9562 §5.5. */
+export function nameBasedUuid(namespace: Buffer, name: string): string {
+  const hash = createHash('sha1').update(namespace).update(name, 'utf8').digest();
   const bytes = Buffer.from(hash.subarray(0, 16));
   bytes[6] = (bytes[6] & 0x0f) | 0x50;
   bytes[8] = (bytes[8] & 0x3f) | 0x80;

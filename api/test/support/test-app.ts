@@ -34,10 +34,11 @@ export interface TestApp {
  * through the payments stand-in started here in-process (PAYMENTS_API_URL points at it). The
  * application listens on a free loopback port, so the stand-in can deliver its webhooks.
  */
-export async function startTestApp(): Promise<TestApp> {
+export async function startTestApp(options: { smtpUrl?: string } = {}): Promise<TestApp> {
   const mailbox = new Mailbox();
   await mailbox.start();
-  process.env.SMTP_URL = mailbox.url;
+  // A spec may send to another SMTP server of its own (the outbox spec uses MailDev).
+  process.env.SMTP_URL = options.smtpUrl ?? mailbox.url;
   const payments = await startPaymentsStandIn();
   process.env.PAYMENTS_API_URL = payments.apiUrl;
   // Photos go to a folder of this run (a spec may set its own UPLOAD_DIR to look into it).
