@@ -274,6 +274,12 @@ describe('desk bookings: audit trail, roles, top-ups, re-planning and reminders'
       const booking = await requestedBooking();
       const target = takeStart();
       await post(desk, `/api/bookings/${booking.id}/advance`, { state: 'confirmed' }).expect(200);
+      const blank = await post(customer, `/api/bookings/${booking.id}/move-request`, {
+        note: '   ',
+      }).expect(400);
+      expect((blank.body as { fieldErrors: Record<string, string[]> }).fieldErrors.note).toEqual([
+        'must be 1 to 500 characters',
+      ]);
       await post(customer, `/api/bookings/${booking.id}/move-request`, {
         note: 'Could it be a little later?',
       }).expect(200);

@@ -1,3 +1,4 @@
+import { DateTime } from 'luxon';
 import { PDFParse } from 'pdf-parse';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { formatCents } from '../src/pricing/cents';
@@ -196,22 +197,28 @@ describe('quotes: revisions by the desk', () => {
 
   it('moves a held booking to the accepted revision and re-plans its bay time', async () => {
     const quote = await customerQuote();
+    // The first start of a day five weeks out, which no other spec books: the hour more on the
+    // hoist fits after it, so the booking is re-planned at the same start (not flagged to move).
+    const from = DateTime.now().setZone('Australia/Sydney').plus({ days: 35 }).toISODate()!;
     const availability = await customer.agent
       .get('/api/availability')
-      .query({ quoteVersionId: quote.versions[0].id })
+      .query({ quoteVersionId: quote.versions[0].id, from, days: 7 })
       .expect(200);
-    const starts = (
+    const start = (
       availability.body as { days: Array<{ starts: Array<{ startUtc: string }> }> }
-    ).days.flatMap((day) => day.starts);
-    // A start two days out or more, so the lead time and the day's end leave room to re-plan.
-    const start = starts.find((option) => Date.parse(option.startUtc) > Date.now() + 48 * 3600_000);
+    ).days.find((day) => day.starts.length > 0)?.starts[0];
     expect(start).toBeDefined();
     const held = await post(customer, '/api/bookings', {
       quoteVersionId: quote.versions[0].id,
       start: start!.startUtc,
     });
     expect(held.status, JSON.stringify(held.body)).toBe(201);
-    const before = held.body as { id: string; startUtc: string; endUtc: string };
+    const before = held.body as {
+      id: string;
+      startUtc: string;
+      endUtc: string;
+      segments: Array<{ bayKind: string; minutes: number }>;
+    };
 
     // 60 more minutes on the kit (the hoist bay).
     await post(desk, `/api/quotes/${quote.id}/revisions`, revision()).expect(201);
@@ -222,20 +229,89 @@ describe('quotes: revisions by the desk', () => {
       endUtc: string;
       quote: { versionNumber: number };
       needsMove: { reason: string } | null;
-      events: Array<{ kind: string }>;
+      segments: Array<{ bayKind: string; minutes: number }>;
+      events: Array<{ kind: string; detail: string }>;
     };
     expect(after.quote.versionNumber).toBe(2);
-    const last = after.events.at(-1)?.kind;
-    if (after.needsMove) {
-      // It no longer fits at that start: the time is kept and the desk is asked to move it.
-      expect(last).toBe('needs-move');
-      expect(after.endUtc).toBe(before.endUtc);
-    } else {
-      expect(last).toBe('re-planned');
-      expect(after.startUtc).toBe(before.startUtc);
-      expect(after.endUtc).not.toBe(before.endUtc);
-    }
+    expect(after.needsMove).toBeNull();
+    expect(after.events.at(-1)?.kind).toBe('re-planned');
+    expect(after.startUtc).toBe(before.startUtc);
+    expect(Date.parse(after.endUtc)).toBeGreaterThan(Date.parse(before.endUtc));
+    const hoist = (booking: { segments: Array<{ bayKind: string; minutes: number }> }) =>
+      booking.segments.find((segment) => segment.bayKind === 'hoist')?.minutes ?? 0;
+    // The kit's hour more, and the fifth tyre's mounting at the workshop's minutes per wheel.
+    const perWheel = (
+      await testApp.db.query<{ minutes: number }>(
+        'select fitting_minutes_per_wheel as minutes from workshop limit 1',
+      )
+    ).rows[0].minutes;
+    expect(hoist(after) - hoist(before)).toBe(60 + perWheel);
+    // Once the work has started, the quote is closed to revisions (409), nothing written.
+    await testApp.db.query(`update booking set state = 'in-progress' where id = $1`, [before.id]);
+    const refused = await post(desk, `/api/quotes/${quote.id}/revisions`, revision()).expect(409);
+    expect((refused.body as { message: string }).message).toContain('in progress');
+    expect(await versionCount(quote.id)).toBe(2);
+    await testApp.db.query(`update booking set state = 'held' where id = $1`, [before.id]);
     await post(customer, `/api/bookings/${before.id}/cancel`).expect(200);
+  });
+
+  it('replaces an open deposit page of the old amount after a revision is accepted', async () => {
+    const alignment = (
+      await testApp.db.query<{ id: string }>("select id from product where sku = 'KW-SVC-ALIGN'")
+    ).rows[0].id;
+    const saved = await post(
+      customer,
+      '/api/quotes',
+      packageWith([{ productId: alignment, quantity: 1 }]),
+    );
+    expect(saved.status, JSON.stringify(saved.body)).toBe(201);
+    const quote = saved.body as Quote;
+    const availability = await customer.agent
+      .get('/api/availability')
+      .query({ quoteVersionId: quote.versions[0].id })
+      .expect(200);
+    const start = (
+      availability.body as { days: Array<{ starts: Array<{ startUtc: string }> }> }
+    ).days
+      .flatMap((day) => day.starts)
+      .find((option) => Date.parse(option.startUtc) > Date.now() + 48 * 3600_000);
+    const held = await post(customer, '/api/bookings', {
+      quoteVersionId: quote.versions[0].id,
+      start: start!.startUtc,
+    });
+    expect(held.status, JSON.stringify(held.body)).toBe(201);
+    const bookingId = (held.body as { id: string }).id;
+    const first = await post(customer, `/api/bookings/${bookingId}/deposit-checkout`).expect(201);
+
+    const revised = await post(
+      desk,
+      `/api/quotes/${quote.id}/revisions`,
+      packageWith(
+        [
+          { productId: alignment, quantity: 1 },
+          { productId: tyre, quantity: 4 },
+        ],
+        { reason: 'Four new tyres as we discussed on the phone.' },
+      ),
+    );
+    expect(revised.status, JSON.stringify(revised.body)).toBe(201);
+    const v2 = (revised.body as Quote).versions[1];
+    expect(v2.price.depositCents).toBeGreaterThan(quote.versions[0].price.depositCents);
+    await post(customer, `/api/quotes/${quote.id}/versions/2/accept`).expect(200);
+
+    const second = await post(customer, `/api/bookings/${bookingId}/deposit-checkout`).expect(201);
+    expect((second.body as { checkoutUrl: string }).checkoutUrl).not.toBe(
+      (first.body as { checkoutUrl: string }).checkoutUrl,
+    );
+    const payments = await testApp.db.query<{ status: string; amount_cents: number }>(
+      "select status, amount_cents from payment where booking_id = $1 and kind = 'deposit' order by attempt",
+      [bookingId],
+    );
+    expect(payments.rows).toEqual([
+      { status: 'expired', amount_cents: quote.versions[0].price.depositCents },
+      { status: 'open', amount_cents: v2.price.depositCents },
+    ]);
+    await post(customer, `/api/bookings/${bookingId}/cancel`).expect(200);
   });
 
   it('is refused for the customer and the technician, and for another quote id (404)', async () => {

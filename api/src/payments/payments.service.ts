@@ -89,10 +89,12 @@ export class PaymentsService {
     const open = payments.find(
       (payment) => payment.kind === 'deposit' && payment.status === 'open',
     );
-    if (open) {
+    if (open && open.amountCents === depositCents) {
       this.keepHoldUntil(booking, open.expiresAt);
       return { checkoutUrl: open.checkoutUrl, expiresAt: open.expiresAt };
     }
+    // A page for another amount (the quote was revised since): closed, then a new one.
+    if (open) await this.closeSession(open, now);
 
     let attempt = payments.reduce((highest, payment) => Math.max(highest, payment.attempt), 0) + 1;
     for (let tries = 1; ; tries += 1, attempt += 1) {

@@ -1,6 +1,6 @@
 import { LockMode } from '@mikro-orm/core';
 import { EntityManager } from '@mikro-orm/postgresql';
-import { Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { Booking } from '../bookings/entities/booking.entity';
 import { ACTIVE_BOOKING_STATES, bookingReference } from '../bookings/booking-states';
 import { FieldErrorsException } from '../common/errors/field-errors.exception';
@@ -73,6 +73,15 @@ export class QuoteRevisionsService {
       const locked = await em.findOne(Quote, { id }, { lockMode: LockMode.PESSIMISTIC_WRITE });
       if (!locked) throw new NotFoundException(QUOTE_NOT_FOUND);
       const quote = await this.quotes.loadVisible(id, user);
+      const started = await em.findOne(Booking, {
+        quoteVersion: { quote: quote.id },
+        state: { $in: ['in-progress', 'completed'] },
+      });
+      if (started) {
+        throw new ConflictException(
+          `Booking ${bookingReference(started.number)} for this quote is ${started.state === 'completed' ? 'completed' : 'in progress'}: the work is closed against the version it was booked on, so the quote cannot be revised now.`,
+        );
+      }
       const versions = quote.versions.getItems();
       const previous = versions.reduce((latest, version) =>
         version.number > latest.number ? version : latest,

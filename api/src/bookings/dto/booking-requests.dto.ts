@@ -1,18 +1,7 @@
+import { TrimmedText } from '../../common/decorators/field-validators';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Type } from 'class-transformer';
-import {
-  IsDateString,
-  IsIn,
-  IsInt,
-  IsOptional,
-  IsString,
-  IsUUID,
-  Matches,
-  Max,
-  MaxLength,
-  Min,
-  MinLength,
-} from 'class-validator';
+import { IsDateString, IsIn, IsInt, IsOptional, IsUUID, Matches, Max, Min } from 'class-validator';
 
 const ISO_DATE = /^\d{4}-\d{2}-\d{2}$/;
 /** An instant needs its offset: 'Z' or '+11:00'. */
@@ -56,9 +45,7 @@ export class MoveBookingDto {
 }
 
 export class MoveRequestDto {
-  @IsString({ message: 'must be text' })
-  @MinLength(1, { message: 'must not be empty' })
-  @MaxLength(500, { message: 'must be 500 characters or fewer' })
+  @TrimmedText(1, 500)
   @ApiProperty({ example: 'Could it be the Thursday after?', maxLength: 500 })
   note!: string;
 }

@@ -179,6 +179,21 @@ describe('booking messages', () => {
     expect(quote.html).toContain('1,000.00 AUD');
     expect(quote.text).toContain(DEMO_WORKSHOP_CARD.phone);
   });
+
+  it('reminder: tomorrow at the local start, where to come, the cautions, no attachment', () => {
+    const message = bookingReminderMessage(INPUT);
+    expectCommonParts(message);
+    // Source: IANA tz database (the zone data the runtime ships): Sydney keeps daylight time
+    // (AEDT, UTC+11) in December, so 21:30 UTC on the 3rd is 8:30 am on Friday the 4th.
+    expect(message.subject).toBe('Reminder: booking B-000042 tomorrow at 8:30 am');
+    for (const part of [message.text, message.html]) {
+      expect(part).toContain('Friday 4 December 2026, 8:30 am AEDT');
+      expect(part).toContain(DEMO_WORKSHOP_CARD.town);
+      expect(part).toContain('licensed technician');
+      expect(part).toContain('wheel nuts re-checked');
+    }
+    expect(message.attachments).toEqual([]);
+  });
 });
 
 describe('vtimezone', () => {
@@ -196,20 +211,5 @@ describe('vtimezone', () => {
     expect(text.match(/BEGIN:STANDARD/g)).toHaveLength(1);
     expect(text).toContain('TZOFFSETTO:+1000');
     expect(text).not.toContain('DAYLIGHT');
-  });
-
-  it('reminder: tomorrow at the local start, where to come, the cautions, no attachment', () => {
-    const message = bookingReminderMessage(INPUT);
-    expectCommonParts(message);
-    // Source: IANA tz database (the zone data the runtime ships): Sydney keeps daylight time
-    // (AEDT, UTC+11) in December, so 21:30 UTC on the 3rd is 8:30 am on Friday the 4th.
-    expect(message.subject).toBe('Reminder: booking B-000042 tomorrow at 8:30 am');
-    for (const part of [message.text, message.html]) {
-      expect(part).toContain('Friday 4 December 2026, 8:30 am AEDT');
-      expect(part).toContain(DEMO_WORKSHOP_CARD.town);
-      expect(part).toContain('licensed technician');
-      expect(part).toContain('wheel nuts re-checked');
-    }
-    expect(message.attachments).toEqual([]);
   });
 });

@@ -69,8 +69,15 @@ export function layoutMessage(input: {
         `<tr><th align="left" style="padding: 2px 12px 2px 0;">${escapeHtml(label)}</th><td>${escapeHtml(value)}</td></tr>`,
     )
     .join('\n        ');
+  // A paragraph that is only a web address becomes a link in the HTML part.
   const paragraphs = (list: string[]) =>
-    list.map((paragraph) => `<p>${escapeHtml(paragraph)}</p>`).join('\n    ');
+    list
+      .map((paragraph) =>
+        /^https?:\/\/\S+$/.test(paragraph)
+          ? `<p><a href="${escapeHtml(paragraph)}">${escapeHtml(paragraph)}</a></p>`
+          : `<p>${escapeHtml(paragraph)}</p>`,
+      )
+      .join('\n    ');
   const html = `<!doctype html>
 <html lang="en">
   <body style="font-family: sans-serif; line-height: 1.5; color: #1f2328;">
