@@ -163,10 +163,11 @@ describe('quotes: revisions by the desk', () => {
     expect(mail.text).toContain(`was ${formatCents(before.price.totalCents)}`);
     expect(mail.text).toContain(REASON);
     expect(mail.html).toContain(total);
-    const link = `/account/quotes/${quote.id}/versions/2/compare`;
+    const link = `/account/quotes/${quote.reference}/versions/2/compare`;
     expect(mail.text).toContain(link);
-    // No raw ids in the words: the quote's id appears only inside the link.
-    expect(mail.text.split(quote.id)).toHaveLength(2);
+    expect(mail.html).toContain(`href="http://127.0.0.1:4400${link}"`);
+    // No raw ids anywhere in the words or the link.
+    expect(mail.text).not.toMatch(/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/);
 
     const pdf = mail.attachments.find((attachment) => attachment.contentType === 'application/pdf');
     expect(pdf?.filename).toBe(`quote-${quote.reference}-v2.pdf`);

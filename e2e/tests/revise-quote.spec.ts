@@ -119,14 +119,16 @@ describe('The desk revises a booked quote; the customer compares and accepts it 
     const totalLine = /New total:?\s*(.+)/.exec(text)?.[1] ?? '';
     const mailedTotalCents = centsOf(totalLine);
     expect(mailedTotalCents).toBe(v2.price.totalCents);
-    const link = /https?:\/\/\S+\/account\/quotes\/[0-9a-f-]{36}\/versions\/2\/compare/.exec(text);
+    const link = /https?:\/\/\S+\/account\/quotes\/Q-\d{6}\/versions\/2\/compare/.exec(text);
     expect(link, 'the e-mail links to the comparison').not.toBeNull();
-    const comparePath = new URL(link?.[0] ?? '').pathname;
-    expect(comparePath).toBe(`/account/quotes/${saved.id}/versions/2/compare`);
+    // The link names the quote by its reference; the page finds it and shows it by its id.
+    const mailedPath = new URL(link?.[0] ?? '').pathname;
+    expect(mailedPath).toBe(`/account/quotes/${saved.reference}/versions/2/compare`);
+    const comparePath = `/account/quotes/${saved.id}/versions/2/compare`;
 
     // The customer on a phone follows the link, signs in and lands on the comparison.
     const phone = await newPage(browser, 'phone');
-    await phone.page.goto(comparePath);
+    await phone.page.goto(mailedPath);
     await phone.page.waitForURL((url) => url.pathname === '/sign-in');
     await phone.page.getByLabel('E-mail').fill(customer.email);
     await phone.page.getByLabel('Password').fill(customer.password);

@@ -31,9 +31,13 @@ const SUPERSEDED_BY_A_REVISION: readonly QuoteVersionState[] = [
   'expired',
 ];
 
-/** The customer's page that shows a version beside the one before and takes the answer. */
-export function comparePath(quoteId: string, versionNumber: number): string {
-  return `/account/quotes/${quoteId}/versions/${versionNumber}/compare`;
+/**
+ * The customer's page that shows a version beside the one before and takes the answer, named by
+ * the reference the customer knows (Q-000123), not an internal id; the page finds the quote among
+ * the signed-in customer's own.
+ */
+export function comparePath(quoteNumber: number, versionNumber: number): string {
+  return `/account/quotes/${quoteReference(quoteNumber)}/versions/${versionNumber}/compare`;
 }
 
 /**
@@ -171,7 +175,7 @@ export class QuoteRevisionsService {
         depositCents: version.depositCents,
         previousDepositCents: previous.depositCents,
         validUntilDate: version.validUntilDate,
-        compareUrl: `${this.config.publicUrl}${comparePath(quote.id, version.number)}`,
+        compareUrl: `${this.config.publicUrl}${comparePath(quote.number, version.number)}`,
         bookingLine: booking
           ? `${bookingReference(booking.number)}, ${workshopDateTime(booking.startsAt, workshop.timeZone)}`
           : null,

@@ -4,13 +4,14 @@ import Button from '@mui/material/Button';
 import Link from '@mui/material/Link';
 import { useQuery } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Link as RouterLink, useParams } from 'react-router';
+import { Navigate, Link as RouterLink, useParams } from 'react-router';
 import { LoadingScreen } from '@/components/ui/loading-screen';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { bookingsQueryOptions } from '@/features/bookings/api/get-bookings';
 import { PayTopUp } from '@/features/bookings/components/pay-top-up';
 import { quoteQueryOptions } from '@/features/quotes/api/get-quote';
+import { quotesQueryOptions } from '@/features/quotes/api/get-quotes';
 import { workshopQueryOptions } from '@/features/quotes/api/get-workshop';
 import { AcceptedBookingOutcome } from '@/features/quotes/components/accepted-booking-outcome';
 import { CompareAnswer } from '@/features/quotes/components/compare-answer';
@@ -25,7 +26,49 @@ import type { Booking } from '@/types/api';
  * full, the cautions, Accept or Decline, and then what happened to the booking (and the
  * difference to pay when the deposit went up).
  */
+/** "Q-000014": the e-mail's link names the quote by the reference the customer knows. */
+const QUOTE_REFERENCE = /^Q-\d{6,}$/i;
+
 export default function QuoteCompareRoute() {
+  const { quoteId = '' } = useParams();
+  return QUOTE_REFERENCE.test(quoteId) ? (
+    <QuoteByReference reference={quoteId.toUpperCase()} />
+  ) : (
+    <QuoteCompare />
+  );
+}
+
+/** Finds the customer's own quote with this reference and opens its comparison. */
+function QuoteByReference({ reference }: { reference: string }) {
+  const { versionNumber = '' } = useParams();
+  const quotes = useQuery(quotesQueryOptions({ q: reference }));
+  if (quotes.isPending) return <LoadingScreen label="Finding the quote" />;
+  const found = quotes.data?.items.find((item) => item.reference === reference);
+  if (found && /^\d+$/.test(versionNumber)) {
+    return (
+      <Navigate replace to={paths.account.quoteCompare.getHref(found.id, Number(versionNumber))} />
+    );
+  }
+  return (
+    <>
+      <PageHeader title="Quote not found" />
+      <Alert severity="error">
+        {quotes.isError && !(isApiError(quotes.error) && quotes.error.statusCode === 404)
+          ? 'The quote could not be loaded. Please try again.'
+          : `You have no quote ${reference}. Sign in with the address the e-mail was sent to.`}
+      </Alert>
+      <Link
+        component={RouterLink}
+        to={paths.account.quotes.getHref()}
+        sx={{ display: 'inline-block', mt: 2 }}
+      >
+        Back to my quotes
+      </Link>
+    </>
+  );
+}
+
+function QuoteCompare() {
   const { quoteId = '', versionNumber = '' } = useParams();
   const number = /^\d+$/.test(versionNumber) ? Number(versionNumber) : NaN;
   const quote = useQuery(quoteQueryOptions(quoteId));
