@@ -170,7 +170,14 @@ function QuoteCompare() {
                 booking={booking}
                 before={bookingBefore}
                 versionNumber={after.number}
-                loading={bookings.isPending || bookings.isFetching}
+                // Checking until the booking read back is on the accepted version; a later
+                // refresh keeps the outcome (and its pay button) on screen.
+                loading={
+                  bookings.isPending ||
+                  (bookings.isFetching &&
+                    booking !== undefined &&
+                    booking.quote.versionNumber !== after.number)
+                }
                 bookingHref={(id) => paths.account.booking.getHref(id)}
                 bookHref={paths.plan.book.getHref(quote.data.id)}
                 payDifference={(active) => <PayTopUp booking={active} label="Pay the difference" />}

@@ -19,9 +19,14 @@ export function useStartTopUpCheckout() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: startTopUpCheckout,
-    onSuccess: async (checkout, bookingId) => {
+    // The page leaves for the provider next: the booking is updated in place and the lists are
+    // marked stale without a refetch now (one would re-render the page on the way out).
+    onSuccess: (checkout, bookingId) => {
       queryClient.setQueryData(bookingQueryKey(bookingId), checkout.booking);
-      await queryClient.invalidateQueries({ queryKey: [...bookingsQueryKey, 'list'] });
+      void queryClient.invalidateQueries({
+        queryKey: [...bookingsQueryKey, 'list'],
+        refetchType: 'none',
+      });
     },
     // Refused (nothing due any more, or paid meanwhile): show the booking as it now stands.
     onError: (_error, bookingId) =>

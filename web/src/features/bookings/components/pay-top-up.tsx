@@ -34,13 +34,18 @@ export function PayTopUp({ booking, label }: { booking: Booking; label?: string 
 
   const pay = () => {
     setUnusableAddress(false);
-    checkout.mutate(booking.id, {
-      onSuccess: (answer) => {
+    // The promise, not the mutate callback: the page may re-render this button away while the
+    // lists refresh, and a mutate callback of an unmounted component never runs.
+    checkout
+      .mutateAsync(booking.id)
+      .then((answer) => {
         const address = checkoutAddress(answer.checkoutUrl);
         if (address) window.location.assign(address);
         else setUnusableAddress(true);
-      },
-    });
+      })
+      .catch(() => {
+        // Shown from checkout.error below.
+      });
   };
 
   return (
