@@ -223,6 +223,13 @@ describe('quotes: revisions by the desk', () => {
 
     // 60 more minutes on the kit (the hoist bay).
     await post(desk, `/api/quotes/${quote.id}/revisions`, revision()).expect(201);
+    const waiting = (await customer.agent.get(`/api/bookings/${before.id}`).expect(200)).body as {
+      quote: { versionNumber: number; latestVersionNumber: number };
+      events: Array<{ kind: string; detail: string; actor: { role: string } | null }>;
+    };
+    expect(waiting.quote).toMatchObject({ versionNumber: 1, latestVersionNumber: 2 });
+    expect(waiting.events.at(-1)).toMatchObject({ kind: 'revision-sent', actor: { role: 'desk' } });
+    expect(waiting.events.at(-1)?.detail).toContain(REASON);
     await post(customer, `/api/quotes/${quote.id}/versions/2/accept`).expect(200);
 
     const after = (await customer.agent.get(`/api/bookings/${before.id}`).expect(200)).body as {
@@ -254,6 +261,43 @@ describe('quotes: revisions by the desk', () => {
     expect(await versionCount(quote.id)).toBe(2);
     await testApp.db.query(`update booking set state = 'held' where id = $1`, [before.id]);
     await post(customer, `/api/bookings/${before.id}/cancel`).expect(200);
+  });
+
+  it('notes a declined revision in the booking, which stays on its version', async () => {
+    const quote = await customerQuote();
+    const availability = await customer.agent
+      .get('/api/availability')
+      .query({ quoteVersionId: quote.versions[0].id })
+      .expect(200);
+    const start = (
+      availability.body as { days: Array<{ starts: Array<{ startUtc: string }> }> }
+    ).days
+      .flatMap((day) => day.starts)
+      .find((option) => Date.parse(option.startUtc) > Date.now() + 48 * 3600_000);
+    const held = await post(customer, '/api/bookings', {
+      quoteVersionId: quote.versions[0].id,
+      start: start!.startUtc,
+    });
+    expect(held.status, JSON.stringify(held.body)).toBe(201);
+    const bookingId = (held.body as { id: string }).id;
+    await post(desk, `/api/quotes/${quote.id}/revisions`, revision()).expect(201);
+    await post(customer, `/api/quotes/${quote.id}/versions/2/decline`).expect(200);
+    const after = (await customer.agent.get(`/api/bookings/${bookingId}`).expect(200)).body as {
+      startUtc: string;
+      quote: { versionNumber: number; latestVersionState: string };
+      events: Array<{ kind: string; detail: string; actor: { role: string } | null }>;
+    };
+    expect(after.quote).toMatchObject({ versionNumber: 1, latestVersionState: 'declined' });
+    expect(after.startUtc).toBe(start!.startUtc);
+    expect(after.events.map((event) => event.kind).slice(-2)).toEqual([
+      'revision-sent',
+      'revision-declined',
+    ]);
+    expect(after.events.at(-1)).toMatchObject({ actor: { role: 'customer' } });
+    expect(after.events.at(-1)?.detail).toBe(
+      `The customer declined quote ${quote.reference} v2; the booking stays on v1.`,
+    );
+    await post(customer, `/api/bookings/${bookingId}/cancel`).expect(200);
   });
 
   it('replaces an open deposit page of the old amount after a revision is accepted', async () => {

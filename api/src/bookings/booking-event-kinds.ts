@@ -2,7 +2,8 @@
  * What happened to a booking, as its audit trail records it: `held` (a time kept), `deposit-paid`,
  * `requested` (waiting for the workshop), `confirmed`, `moved`, `move-requested` (the customer
  * asked), `arrived` (the vehicle is on site), `started` (work begun), `completed`, `cancelled`, `expired` (the hold ran out),
- * `top-up-paid`, `re-planned` (a revised quote was accepted) and `needs-move` (the revised job
+ * `top-up-paid`, `revision-sent` and `revision-declined` (the desk sent a revised quote; the
+ * customer turned it down), `re-planned` (a revised quote was accepted) and `needs-move` (the revised job
  * no longer fits its time).
  */
 export const BOOKING_EVENT_KINDS = [
@@ -18,6 +19,8 @@ export const BOOKING_EVENT_KINDS = [
   'cancelled',
   'expired',
   'top-up-paid',
+  'revision-sent',
+  'revision-declined',
   're-planned',
   'needs-move',
 ] as const;

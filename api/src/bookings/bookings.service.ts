@@ -18,7 +18,7 @@ import { amount, workshopDateTime } from '../notifications/messages/customer-mes
 import { NotificationsService } from '../notifications/notifications.service';
 import { PaymentsService } from '../payments/payments.service';
 import { QuoteVersion } from '../quotes/entities/quote-version.entity';
-import { QuoteAcceptanceHooks, type QuoteAcceptedEvent } from '../quotes/quote-acceptance';
+import { QuoteHooks, type QuoteAnsweredEvent, type QuoteRevisedEvent } from '../quotes/quote-hooks';
 import { effectiveState } from '../quotes/quote-lifecycle';
 import { quoteReference } from '../quotes/quote-reference';
 import { QuotesService } from '../quotes/quotes.service';
@@ -107,12 +107,14 @@ export class BookingsService implements OnModuleInit {
     private readonly workshop: WorkshopService,
     private readonly payments: PaymentsService,
     private readonly notifications: NotificationsService,
-    private readonly acceptance: QuoteAcceptanceHooks,
+    private readonly quoteHooks: QuoteHooks,
   ) {}
 
   /** An accepted revision of a booked quote re-plans the booking, in the accepting transaction. */
   onModuleInit(): void {
-    this.acceptance.register((event) => this.replanOnAcceptance(event));
+    this.quoteHooks.onAccepted((event) => this.replanOnAcceptance(event));
+    this.quoteHooks.onRevised((event) => this.noteRevision(event));
+    this.quoteHooks.onDeclined((event) => this.noteDeclined(event));
   }
 
   async findAvailability(query: AvailabilityQueryDto, user: User): Promise<AvailabilityResponse> {
@@ -371,17 +373,63 @@ export class BookingsService implements OnModuleInit {
    * times changed the customer is told as of a move. Not fitting: the old reservations stay and
    * the desk is asked to move it (`needsMove`).
    */
-  async replanOnAcceptance({ em, quote, version, actor, now }: QuoteAcceptedEvent): Promise<void> {
+  /** A revised quote was sent: the booking waiting on it says so in its trail. */
+  async noteRevision({
+    em,
+    quote,
+    version,
+    previous,
+    actor,
+    now,
+  }: QuoteRevisedEvent): Promise<void> {
+    const booking = await this.bookingBefore(em, quote.id, version.number, now);
+    if (!booking) return;
+    const reference = quoteReference(quote.number);
+    recordBookingEvent(
+      em,
+      booking,
+      'revision-sent',
+      `Revised quote ${reference} v${version.number} sent to the customer (it replaces v${previous.number}): “${version.revisionReason ?? ''}”. The booking stays on v${booking.quoteVersion.number} until the customer accepts it.`,
+      actor,
+      now,
+    );
+  }
+
+  /** The customer declined a revision: the booking stays on the version it was booked on. */
+  async noteDeclined({ em, quote, version, actor, now }: QuoteAnsweredEvent): Promise<void> {
+    const booking = await this.bookingBefore(em, quote.id, version.number, now);
+    if (!booking) return;
+    recordBookingEvent(
+      em,
+      booking,
+      'revision-declined',
+      `The customer declined quote ${quoteReference(quote.number)} v${version.number}; the booking stays on v${booking.quoteVersion.number}.`,
+      actor,
+      now,
+    );
+  }
+
+  /** The quote's live booking on a version before `versionNumber`, locked; null when none. */
+  private async bookingBefore(
+    em: EntityManager,
+    quoteId: string,
+    versionNumber: number,
+    now: Date,
+  ): Promise<Booking | null> {
     const [row] = await em.execute<{ id: string }[]>(
       `select b.id from booking b join quote_version v on v.id = b.quote_version_id
         where v.quote_id = ? and v.number < ? and b.state in (?, ?, ?)
           and not (b.state = 'held' and b.hold_expires_at <= ?)
         order by b.created_at desc limit 1
         for update of b`,
-      [quote.id, version.number, ...REPLANNED_STATES, now],
+      [quoteId, versionNumber, ...REPLANNED_STATES, now],
     );
-    if (!row) return;
-    const booking = await em.findOneOrFail(Booking, row.id, { populate: POPULATE });
+    return row ? em.findOneOrFail(Booking, row.id, { populate: POPULATE }) : null;
+  }
+
+  async replanOnAcceptance({ em, quote, version, actor, now }: QuoteAnsweredEvent): Promise<void> {
+    const booking = await this.bookingBefore(em, quote.id, version.number, now);
+    if (!booking) return;
     const accepted = await em.findOneOrFail(QuoteVersion, version.id, {
       populate: ['quote', 'quote.vehicleModel', 'quote.customerVehicle', 'quote.versions'] as const,
     });

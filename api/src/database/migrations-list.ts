@@ -8,6 +8,7 @@ import { Migration20261202070312 } from './migrations/Migration20261202070312';
 import { Migration20261202072618 } from './migrations/Migration20261202072618';
 import { Migration20261202140007 } from './migrations/Migration20261202140007';
 import { Migration20261202142024 } from './migrations/Migration20261202142024';
+import { Migration20261202150130 } from './migrations/Migration20261202150130';
 
 /**
  * Every migration, oldest first. Listed explicitly (rather than found by a file glob) so the same
@@ -24,4 +25,5 @@ export const MIGRATIONS: MigrationObject[] = [
   { name: 'Migration20261202072618', class: Migration20261202072618 },
   { name: 'Migration20261202140007', class: Migration20261202140007 },
   { name: 'Migration20261202142024', class: Migration20261202142024 },
+  { name: 'Migration20261202150130', class: Migration20261202150130 },
 ];

@@ -18,6 +18,7 @@ import type { QuoteResponse } from './dto/quote.response';
 import type { RevisionPackageDto, ReviseQuoteDto } from './dto/revise-quote.dto';
 import type { QuoteVersion } from './entities/quote-version.entity';
 import { Quote } from './entities/quote.entity';
+import { QuoteHooks } from './quote-hooks';
 import { type PricedPackage, QuotePackagesService } from './quote-packages.service';
 import { quotePdfFileName, quoteReference } from './quote-reference';
 import type { QuoteVersionState } from './quote-states';
@@ -54,6 +55,7 @@ export class QuoteRevisionsService {
     private readonly quotes: QuotesService,
     private readonly notifications: NotificationsService,
     private readonly config: AppConfigService,
+    private readonly hooks: QuoteHooks,
   ) {}
 
   /** The revision as it would be saved now: price and fit report; writes nothing. */
@@ -124,6 +126,7 @@ export class QuoteRevisionsService {
       for (const line of lines) version.lines.add(line);
 
       await this.queueRevisedQuote(em, quote, previous, version, now);
+      await this.hooks.runRevised({ em, quote, version, previous, actor: user, now });
     });
     return this.quotes.get(id, user);
   }

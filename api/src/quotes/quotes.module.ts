@@ -17,7 +17,7 @@ import { QuotesController } from './quotes.controller';
 import { CatalogueSnapshotService } from './catalogue-snapshot.service';
 import { PackageDataLoader } from './package-data.loader';
 import { QuotesService } from './quotes.service';
-import { QuoteAcceptanceHooks } from './quote-acceptance';
+import { QuoteHooks } from './quote-hooks';
 import { QuoteRevisionsService } from './quote-revisions.service';
 
 @Module({
@@ -43,8 +43,8 @@ import { QuoteRevisionsService } from './quote-revisions.service';
     PackageDataLoader,
     CatalogueSnapshotService,
     QuoteRevisionsService,
-    QuoteAcceptanceHooks,
+    QuoteHooks,
   ],
-  exports: [QuotesService, QuoteAcceptanceHooks],
+  exports: [QuotesService, QuoteHooks],
 })
 export class QuotesModule {}

@@ -30,7 +30,7 @@ import {
   isBookable,
   sendRefusal,
 } from './quote-lifecycle';
-import { QuoteAcceptanceHooks } from './quote-acceptance';
+import { QuoteHooks } from './quote-hooks';
 import {
   type PricedPackage,
   QuotePackagesService,
@@ -84,7 +84,7 @@ export class QuotesService {
     private readonly workshop: WorkshopService,
     private readonly notifications: NotificationsService,
     private readonly config: AppConfigService,
-    private readonly acceptance: QuoteAcceptanceHooks,
+    private readonly hooks: QuoteHooks,
   ) {}
 
   async preview(dto: QuotePackageDto, user: User | null): Promise<QuotePreviewResponse> {
@@ -379,7 +379,9 @@ export class QuotesService {
       version.stateChangedAt = now;
       if (next === 'accepted') {
         // A booking on an earlier version follows the accepted one (or is flagged to move).
-        await this.acceptance.run({ em, quote, version, actor: user, now });
+        await this.hooks.runAccepted({ em, quote, version, actor: user, now });
+      } else if (next === 'declined') {
+        await this.hooks.runDeclined({ em, quote, version, actor: user, now });
       }
       return null;
     });

@@ -2939,6 +2939,8 @@ export interface components {
       | 'cancelled'
       | 'expired'
       | 'top-up-paid'
+      | 'revision-sent'
+      | 'revision-declined'
       | 're-planned'
       | 'needs-move';
     BookingEventActorResponse: {

@@ -22,6 +22,8 @@ export const bookingEventLabels: Record<BookingEventKind, string> = {
   cancelled: 'Cancelled',
   expired: 'Hold ran out',
   'top-up-paid': 'Top-up paid',
+  'revision-sent': 'Revised quote sent',
+  'revision-declined': 'Revision declined',
   're-planned': 'Re-planned',
   'needs-move': 'Needs a move',
 };
