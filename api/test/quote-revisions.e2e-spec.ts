@@ -99,6 +99,36 @@ describe('quotes: revisions by the desk', () => {
     return Number(rows.rows[0].count);
   }
 
+  /**
+   * Holds a start for the quote version: the first one offered on or after `from` (a local date)
+   * or, without it, the first more than two days ahead. Returns the booking as the API gave it.
+   */
+  async function holdFor(versionId: string, from?: string) {
+    const availability = await customer.agent
+      .get('/api/availability')
+      .query({ quoteVersionId: versionId, ...(from ? { from, days: 7 } : {}) })
+      .expect(200);
+    const start = (
+      availability.body as { days: Array<{ starts: Array<{ startUtc: string }> }> }
+    ).days
+      .flatMap((day) => day.starts)
+      .find(
+        (option) => from !== undefined || Date.parse(option.startUtc) > Date.now() + 48 * 3600_000,
+      );
+    expect(start, 'a start is offered').toBeDefined();
+    const held = await post(customer, '/api/bookings', {
+      quoteVersionId: versionId,
+      start: start!.startUtc,
+    });
+    expect(held.status, JSON.stringify(held.body)).toBe(201);
+    return held.body as {
+      id: string;
+      startUtc: string;
+      endUtc: string;
+      segments: Array<{ bayKind: string; minutes: number }>;
+    };
+  }
+
   beforeAll(async () => {
     testApp = await startTestApp();
     customer = await registerCustomer(testApp);
@@ -201,25 +231,7 @@ describe('quotes: revisions by the desk', () => {
     // The first start of a day five weeks out, which no other spec books: the hour more on the
     // hoist fits after it, so the booking is re-planned at the same start (not flagged to move).
     const from = DateTime.now().setZone('Australia/Sydney').plus({ days: 35 }).toISODate()!;
-    const availability = await customer.agent
-      .get('/api/availability')
-      .query({ quoteVersionId: quote.versions[0].id, from, days: 7 })
-      .expect(200);
-    const start = (
-      availability.body as { days: Array<{ starts: Array<{ startUtc: string }> }> }
-    ).days.find((day) => day.starts.length > 0)?.starts[0];
-    expect(start).toBeDefined();
-    const held = await post(customer, '/api/bookings', {
-      quoteVersionId: quote.versions[0].id,
-      start: start!.startUtc,
-    });
-    expect(held.status, JSON.stringify(held.body)).toBe(201);
-    const before = held.body as {
-      id: string;
-      startUtc: string;
-      endUtc: string;
-      segments: Array<{ bayKind: string; minutes: number }>;
-    };
+    const before = await holdFor(quote.versions[0].id, from);
 
     // 60 more minutes on the kit (the hoist bay).
     await post(desk, `/api/quotes/${quote.id}/revisions`, revision()).expect(201);
@@ -265,21 +277,8 @@ describe('quotes: revisions by the desk', () => {
 
   it('notes a declined revision in the booking, which stays on its version', async () => {
     const quote = await customerQuote();
-    const availability = await customer.agent
-      .get('/api/availability')
-      .query({ quoteVersionId: quote.versions[0].id })
-      .expect(200);
-    const start = (
-      availability.body as { days: Array<{ starts: Array<{ startUtc: string }> }> }
-    ).days
-      .flatMap((day) => day.starts)
-      .find((option) => Date.parse(option.startUtc) > Date.now() + 48 * 3600_000);
-    const held = await post(customer, '/api/bookings', {
-      quoteVersionId: quote.versions[0].id,
-      start: start!.startUtc,
-    });
-    expect(held.status, JSON.stringify(held.body)).toBe(201);
-    const bookingId = (held.body as { id: string }).id;
+    const booking = await holdFor(quote.versions[0].id);
+    const bookingId = booking.id;
     await post(desk, `/api/quotes/${quote.id}/revisions`, revision()).expect(201);
     await post(customer, `/api/quotes/${quote.id}/versions/2/decline`).expect(200);
     const after = (await customer.agent.get(`/api/bookings/${bookingId}`).expect(200)).body as {
@@ -288,7 +287,7 @@ describe('quotes: revisions by the desk', () => {
       events: Array<{ kind: string; detail: string; actor: { role: string } | null }>;
     };
     expect(after.quote).toMatchObject({ versionNumber: 1, latestVersionState: 'declined' });
-    expect(after.startUtc).toBe(start!.startUtc);
+    expect(after.startUtc).toBe(booking.startUtc);
     expect(after.events.map((event) => event.kind).slice(-2)).toEqual([
       'revision-sent',
       'revision-declined',
@@ -311,21 +310,8 @@ describe('quotes: revisions by the desk', () => {
     );
     expect(saved.status, JSON.stringify(saved.body)).toBe(201);
     const quote = saved.body as Quote;
-    const availability = await customer.agent
-      .get('/api/availability')
-      .query({ quoteVersionId: quote.versions[0].id })
-      .expect(200);
-    const start = (
-      availability.body as { days: Array<{ starts: Array<{ startUtc: string }> }> }
-    ).days
-      .flatMap((day) => day.starts)
-      .find((option) => Date.parse(option.startUtc) > Date.now() + 48 * 3600_000);
-    const held = await post(customer, '/api/bookings', {
-      quoteVersionId: quote.versions[0].id,
-      start: start!.startUtc,
-    });
-    expect(held.status, JSON.stringify(held.body)).toBe(201);
-    const bookingId = (held.body as { id: string }).id;
+    const booking = await holdFor(quote.versions[0].id);
+    const bookingId = booking.id;
     const first = await post(customer, `/api/bookings/${bookingId}/deposit-checkout`).expect(201);
 
     const revised = await post(

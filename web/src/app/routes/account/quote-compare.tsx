@@ -11,6 +11,7 @@ import { paths } from '@/config/paths';
 import { bookingsQueryOptions } from '@/features/bookings/api/get-bookings';
 import { PayTopUp } from '@/features/bookings/components/pay-top-up';
 import { quoteQueryOptions } from '@/features/quotes/api/get-quote';
+import { MyQuoteLoadError } from '@/features/quotes/components/my-quote-load-error';
 import { quotesQueryOptions } from '@/features/quotes/api/get-quotes';
 import { workshopQueryOptions } from '@/features/quotes/api/get-workshop';
 import { AcceptedBookingOutcome } from '@/features/quotes/components/accepted-booking-outcome';
@@ -18,7 +19,6 @@ import { CompareAnswer } from '@/features/quotes/components/compare-answer';
 import { VersionCompare } from '@/features/quotes/components/version-compare';
 import { activeBookingOf } from '@/features/quotes/utils/booking-outcome';
 import { previousVersion } from '@/features/quotes/utils/version-diff';
-import { isApiError } from '@/lib/api-client';
 import type { Booking } from '@/types/api';
 
 /**
@@ -50,21 +50,11 @@ function QuoteByReference({ reference }: { reference: string }) {
     );
   }
   return (
-    <>
-      <PageHeader title="Quote not found" />
-      <Alert severity="error">
-        {quotes.isError && !(isApiError(quotes.error) && quotes.error.statusCode === 404)
-          ? 'The quote could not be loaded. Please try again.'
-          : `You have no quote ${reference}. Sign in with the address the e-mail was sent to.`}
-      </Alert>
-      <Link
-        component={RouterLink}
-        to={paths.account.quotes.getHref()}
-        sx={{ display: 'inline-block', mt: 2 }}
-      >
-        Back to my quotes
-      </Link>
-    </>
+    <MyQuoteLoadError
+      error={quotes.isError ? quotes.error : null}
+      onRetry={() => void quotes.refetch()}
+      missingText={`You have no quote ${reference}. Sign in with the address the e-mail was sent to.`}
+    />
   );
 }
 
@@ -84,35 +74,7 @@ function QuoteCompare() {
 
   if (quote.isPending) return <LoadingScreen label="Loading the quote" />;
   if (quote.isError) {
-    const missing = isApiError(quote.error) && quote.error.statusCode === 404;
-    return (
-      <>
-        <PageHeader title={missing ? 'Quote not found' : 'The quote could not be loaded'} />
-        <Alert
-          severity="error"
-          action={
-            missing ? undefined : (
-              <Button color="inherit" onClick={() => void quote.refetch()}>
-                Try again
-              </Button>
-            )
-          }
-        >
-          {missing
-            ? 'There is no quote of yours at this address.'
-            : isApiError(quote.error)
-              ? quote.error.message
-              : 'Please try again.'}
-        </Alert>
-        <Link
-          component={RouterLink}
-          to={paths.account.quotes.getHref()}
-          sx={{ display: 'inline-block', mt: 2 }}
-        >
-          Back to my quotes
-        </Link>
-      </>
-    );
+    return <MyQuoteLoadError error={quote.error} onRetry={() => void quote.refetch()} />;
   }
 
   const after = quote.data.versions.find((version) => version.number === number);

@@ -9,8 +9,8 @@ import { LoadingScreen } from '@/components/ui/loading-screen';
 import { PageHeader } from '@/components/ui/page-header';
 import { paths } from '@/config/paths';
 import { quoteQueryOptions } from '@/features/quotes/api/get-quote';
+import { MyQuoteLoadError } from '@/features/quotes/components/my-quote-load-error';
 import { QuoteDetail } from '@/features/quotes/components/quote-detail';
-import { isApiError } from '@/lib/api-client';
 
 /** Set by the planner's review step when it has just saved this quote. */
 function savedFromPlanner(state: unknown): boolean {
@@ -27,35 +27,7 @@ export default function MyQuoteRoute() {
   const quote = useQuery(quoteQueryOptions(quoteId));
   if (quote.isPending) return <LoadingScreen label="Loading the quote" />;
   if (quote.isError) {
-    const missing = isApiError(quote.error) && quote.error.statusCode === 404;
-    return (
-      <>
-        <PageHeader title={missing ? 'Quote not found' : 'The quote could not be loaded'} />
-        <Alert
-          severity="error"
-          action={
-            missing ? undefined : (
-              <Button color="inherit" onClick={() => void quote.refetch()}>
-                Try again
-              </Button>
-            )
-          }
-        >
-          {missing
-            ? 'There is no quote of yours at this address.'
-            : isApiError(quote.error)
-              ? quote.error.message
-              : 'Please try again.'}
-        </Alert>
-        <Link
-          component={RouterLink}
-          to={paths.account.quotes.getHref()}
-          sx={{ display: 'inline-block', mt: 2 }}
-        >
-          Back to my quotes
-        </Link>
-      </>
-    );
+    return <MyQuoteLoadError error={quote.error} onRetry={() => void quote.refetch()} />;
   }
   const latest = [...quote.data.versions].sort((a, b) => b.number - a.number)[0];
   const latestBookable = latest?.bookable ?? false;
