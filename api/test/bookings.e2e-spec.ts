@@ -1,8 +1,7 @@
-import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { HoldSweeperService } from '../src/bookings/hold-sweeper.service';
-import { vehicleModelId } from './support/catalogue';
 import { registerCustomer, signInAs, type Session } from './support/sessions';
+import { tyreOnlyPackage } from './support/packages';
 import { startTestApp, type TestApp } from './support/test-app';
 
 interface Segment {
@@ -98,20 +97,7 @@ describe('bookings: availability, holds, moves and the database guard', () => {
     desk = await signInAs(testApp, 'desk');
     tech = await signInAs(testApp, 'tech');
     other = await registerCustomer(testApp);
-    const strata = await vehicleModelId(testApp.db, 'Vantrel', 'Strata', 'SR dual cab');
-    const products = await request(testApp.server)
-      .get(`/api/products?vehicleModelId=${strata}&kind=tyre`)
-      .expect(200);
-    const tyre = (
-      products.body as { items: { id: string; fit: { verdict: string } }[] }
-    ).items.find((item) => item.fit.verdict !== 'does-not-fit');
-    expect(tyre).toBeDefined();
-    tyrePackage = {
-      vehicleModelId: strata,
-      uses: ['daily'],
-      constantLoadKg: 0,
-      items: [{ productId: tyre!.id, quantity: 4 }],
-    };
+    tyrePackage = await tyreOnlyPackage(testApp);
   });
 
   afterAll(async () => {

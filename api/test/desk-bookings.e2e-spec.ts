@@ -5,8 +5,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { HoldSweeperService } from '../src/bookings/hold-sweeper.service';
 import { ReminderSweeperService } from '../src/bookings/reminder-sweeper.service';
 import { DEMO_CUSTOMER_VEHICLE } from '../src/database/seeders/demo-vehicle-models.data';
-import { vehicleModelId } from './support/catalogue';
 import { demoUser, registerCustomer, signInAs, type Session } from './support/sessions';
+import { tyreOnlyPackage } from './support/packages';
 import { startTestApp, type TestApp } from './support/test-app';
 
 interface StartOption {
@@ -230,20 +230,7 @@ describe('desk bookings: audit trail, roles, top-ups, re-planning and reminders'
     desk = await signInAs(testApp, 'desk');
     tech = await signInAs(testApp, 'tech');
     other = await registerCustomer(testApp);
-    const strata = await vehicleModelId(testApp.db, 'Vantrel', 'Strata', 'SR dual cab');
-    const products = await request(testApp.server)
-      .get(`/api/products?vehicleModelId=${strata}&kind=tyre`)
-      .expect(200);
-    const tyre = (
-      products.body as { items: { id: string; fit: { verdict: string } }[] }
-    ).items.find((item) => item.fit.verdict !== 'does-not-fit');
-    expect(tyre).toBeDefined();
-    tyrePackage = {
-      vehicleModelId: strata,
-      uses: ['daily'],
-      constantLoadKg: 0,
-      items: [{ productId: tyre!.id, quantity: 4 }],
-    };
+    tyrePackage = await tyreOnlyPackage(testApp);
     const probe = await saveQuote();
     const found = await customer.agent
       .get(`/api/availability?quoteVersionId=${probe.versionId}&days=28`)

@@ -3,7 +3,6 @@ import request from 'supertest';
 import Stripe from 'stripe';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { HoldSweeperService } from '../src/bookings/hold-sweeper.service';
-import { vehicleModelId } from './support/catalogue';
 import { DECLINED_CARD } from './support/payments-stand-in';
 import {
   anonymousSession,
@@ -12,6 +11,7 @@ import {
   signInAs,
   type Session,
 } from './support/sessions';
+import { tyreOnlyPackage } from './support/packages';
 import { startTestApp, type TestApp } from './support/test-app';
 
 interface StartOption {
@@ -207,20 +207,7 @@ describe('payments: deposit checkout, webhooks, refunds and receipts', () => {
     tech = await signInAs(testApp, 'tech');
     manager = await signInAs(testApp, 'manager');
     other = await registerCustomer(testApp);
-    const strata = await vehicleModelId(testApp.db, 'Vantrel', 'Strata', 'SR dual cab');
-    const products = await request(testApp.server)
-      .get(`/api/products?vehicleModelId=${strata}&kind=tyre`)
-      .expect(200);
-    const tyre = (
-      products.body as { items: { id: string; fit: { verdict: string } }[] }
-    ).items.find((item) => item.fit.verdict !== 'does-not-fit');
-    expect(tyre).toBeDefined();
-    tyrePackage = {
-      vehicleModelId: strata,
-      uses: ['daily'],
-      constantLoadKg: 0,
-      items: [{ productId: tyre!.id, quantity: 4 }],
-    };
+    tyrePackage = await tyreOnlyPackage(testApp);
     // Starts that do not overlap one another, all more than 50 hours ahead.
     const versionId = await saveQuote();
     const found = await customer.agent
