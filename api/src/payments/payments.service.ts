@@ -86,37 +86,13 @@ export class PaymentsService {
     for (const payment of payments) {
       if (payment.status === 'open' && payment.expiresAt <= now) payment.status = 'expired';
     }
-    const open = payments.find(
-      (payment) => payment.kind === 'deposit' && payment.status === 'open',
-    );
-    if (open && open.amountCents === depositCents) {
-      this.keepHoldUntil(booking, open.expiresAt);
-      return { checkoutUrl: open.checkoutUrl, expiresAt: open.expiresAt };
-    }
-    // A page for another amount (the quote was revised since): closed, then a new one.
-    if (open) await this.closeSession(open, now);
-
-    let attempt = payments.reduce((highest, payment) => Math.max(highest, payment.attempt), 0) + 1;
-    for (let tries = 1; ; tries += 1, attempt += 1) {
-      try {
-        const payment = await this.createSession(booking, workshop, attempt, now, {
-          kind: 'deposit',
-          amountCents: depositCents,
-        });
-        em.persist(payment);
-        this.keepHoldUntil(booking, payment.expiresAt);
-        return { checkoutUrl: payment.checkoutUrl, expiresAt: payment.expiresAt };
-      } catch (error) {
-        // A key of an earlier try whose answer never reached us, now with other parameters (a
-        // later expiry): that session was never shown to anyone, so take the next attempt.
-        if (isIdempotencyConflict(error) && tries < ATTEMPT_TRIES) continue;
-        if (error instanceof BadGatewayException) throw error;
-        throw providerFailure(error, this.logger, {
-          action: 'start the deposit payment',
-          unchanged: 'Nothing was charged and the booking is unchanged.',
-        });
-      }
-    }
+    const page = await this.openOrNewSession(em, booking, workshop, now, {
+      kind: 'deposit',
+      amountCents: depositCents,
+      action: 'start the deposit payment',
+    });
+    this.keepHoldUntil(booking, page.expiresAt);
+    return page;
   }
 
   /**
@@ -151,19 +127,39 @@ export class PaymentsService {
         `Nothing is due: the deposit for booking ${reference} is paid in full.`,
       );
     }
-    const open = payments.find((payment) => payment.kind === 'top-up' && payment.status === 'open');
-    if (open && open.amountCents === dueCents) {
+    return this.openOrNewSession(em, booking, workshop, now, {
+      kind: 'top-up',
+      amountCents: dueCents,
+      action: 'start the deposit top-up payment',
+    });
+  }
+
+  /**
+   * The open checkout session of this kind when it is for this amount, otherwise a new one (an
+   * open one for another amount, from before a revision, is closed first so it cannot be paid).
+   * Attempt numbers name the idempotency keys; a key already used with other parameters (an
+   * earlier try whose answer never reached us) moves on to the next attempt.
+   */
+  private async openOrNewSession(
+    em: EntityManager,
+    booking: Booking,
+    workshop: Workshop,
+    now: Date,
+    { kind, amountCents, action }: { kind: PaymentKind; amountCents: number; action: string },
+  ): Promise<DepositCheckout> {
+    const payments = booking.payments.getItems();
+    const open = payments.find((payment) => payment.kind === kind && payment.status === 'open');
+    if (open && open.amountCents === amountCents) {
       return { checkoutUrl: open.checkoutUrl, expiresAt: open.expiresAt };
     }
-    // A page for another amount (the deposit changed again since): closed, so it cannot be paid.
     if (open) await this.closeSession(open, now);
 
     let attempt = payments.reduce((highest, payment) => Math.max(highest, payment.attempt), 0) + 1;
     for (let tries = 1; ; tries += 1, attempt += 1) {
       try {
         const payment = await this.createSession(booking, workshop, attempt, now, {
-          kind: 'top-up',
-          amountCents: dueCents,
+          kind,
+          amountCents,
         });
         em.persist(payment);
         return { checkoutUrl: payment.checkoutUrl, expiresAt: payment.expiresAt };
@@ -171,7 +167,7 @@ export class PaymentsService {
         if (isIdempotencyConflict(error) && tries < ATTEMPT_TRIES) continue;
         if (error instanceof BadGatewayException) throw error;
         throw providerFailure(error, this.logger, {
-          action: 'start the deposit top-up payment',
+          action,
           unchanged: 'Nothing was charged and the booking is unchanged.',
         });
       }
