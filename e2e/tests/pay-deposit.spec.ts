@@ -6,6 +6,7 @@ import { journey } from '../support/journey';
 import { baseUrl, paymentsUrl } from '../support/env';
 import { waitForMessage } from '../support/inbox';
 import { getJson } from '../support/session';
+import { amountDigits, dollars, futureExpiry } from '../support/amounts';
 
 const JOURNEY = 'pay-deposit';
 
@@ -28,29 +29,6 @@ interface Booking {
     lateCancelRefundPercent: number;
     refundIfCancelledNowCents: number;
   };
-}
-
-/** Cents as the screens show them ("$1,000.00"), by this Node process's Intl (not the app's). */
-function dollars(cents: number): string {
-  return new Intl.NumberFormat('en-AU', {
-    style: 'currency',
-    currency: 'AUD',
-    currencyDisplay: 'narrowSymbol',
-  }).format(cents / 100);
-}
-
-/** Cents as digits only ("1,000.00"), for text that writes the currency its own way. */
-function amountDigits(cents: number): string {
-  return new Intl.NumberFormat('en-AU', {
-    minimumFractionDigits: 2,
-    maximumFractionDigits: 2,
-  }).format(cents / 100);
-}
-
-/** A card expiry date three years on, as MM/YY. */
-function futureExpiry(): string {
-  const year = (new Date().getUTCFullYear() + 3) % 100;
-  return `12/${String(year).padStart(2, '0')}`;
 }
 
 const { browser: currentBrowser, record } = journey(JOURNEY);

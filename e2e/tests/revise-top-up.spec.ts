@@ -6,6 +6,7 @@ import { baseUrl, demoUsers, paymentsUrl } from '../support/env';
 import { waitForMessage } from '../support/inbox';
 import { journey } from '../support/journey';
 import { getJson, postJson, signIn } from '../support/session';
+import { amountDigits, dollars, futureExpiry } from '../support/amounts';
 
 const JOURNEY = 'revise-top-up';
 
@@ -71,29 +72,6 @@ interface Policies {
 }
 
 const { browser: currentBrowser, record } = journey(JOURNEY);
-
-/** Cents as the screens show them ("$1,000.00"), by this Node process's Intl (not the app's). */
-function dollars(cents: number): string {
-  return new Intl.NumberFormat('en-AU', {
-    style: 'currency',
-    currency: 'AUD',
-    currencyDisplay: 'narrowSymbol',
-  }).format(cents / 100);
-}
-
-/** Cents as digits only ("1,000.00"), for text that writes the currency its own way. */
-function amountDigits(cents: number): string {
-  return new Intl.NumberFormat('en-AU', {
-    minimumFractionDigits: 2,
-    maximumFractionDigits: 2,
-  }).format(cents / 100);
-}
-
-/** A card expiry date three years on, as MM/YY. */
-function futureExpiry(): string {
-  const year = (new Date().getUTCFullYear() + 3) % 100;
-  return `12/${String(year).padStart(2, '0')}`;
-}
 
 async function readBooking(page: Page, bookingId: string): Promise<Booking> {
   const answer = await getJson<Booking>(page, `/api/bookings/${bookingId}`);
