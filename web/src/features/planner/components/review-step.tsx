@@ -12,12 +12,11 @@ import Link from '@mui/material/Link';
 import Typography from '@mui/material/Typography';
 import SaveOutlined from '@mui/icons-material/SaveOutlined';
 import { useQuery } from '@tanstack/react-query';
-import { useId, useState, type ReactNode } from 'react';
+import { useId, useState } from 'react';
 import { Link as RouterLink, useNavigate } from 'react-router';
 import { FitReportPanel } from '@/components/quote/fit-report-panel';
 import { PriceBreakdown } from '@/components/quote/price-breakdown';
 import { paths } from '@/config/paths';
-import { isApiError } from '@/lib/api-client';
 import { formatWholeNumber } from '@/lib/format';
 import { useCreateQuote } from '../api/create-quote';
 import { uploadsQueryOptions } from '../api/get-uploads';
@@ -27,25 +26,7 @@ import { usePlanner } from '../hooks/use-planner';
 import { PhotoAttachments } from './photo-attachments';
 import { PlannerStep } from './planner-step';
 import { ReviseReviewStep } from './revise-review-step';
-
-/** An API error in words: its message, then every field message. */
-function errorText(error: unknown): string {
-  if (!isApiError(error)) return 'Something went wrong. Please try again.';
-  const details = Object.values(error.fieldErrors).flat();
-  return details.length > 0 ? details.join(' ') : error.message;
-}
-
-function Section({ title, children }: { title: string; children: ReactNode }) {
-  const id = useId();
-  return (
-    <Box component="section" aria-labelledby={id}>
-      <Typography id={id} variant="h2" sx={{ mb: 1.5 }}>
-        {title}
-      </Typography>
-      {children}
-    </Box>
-  );
-}
+import { ReviewSection, errorText } from './review-section';
 
 /** Step 6: in a revision, the desk's terms and "Save and send"; otherwise "Save quote". */
 export function ReviewStep() {
@@ -169,7 +150,7 @@ function SaveReviewStep() {
       ) : (
         preview.data && (
           <>
-            <Section title="Your vehicle">
+            <ReviewSection title="Your vehicle">
               <Typography sx={{ fontWeight: 500 }}>
                 {preview.data.vehicle.name}
                 {build.year ? `, ${build.year}` : ''}
@@ -183,17 +164,17 @@ function SaveReviewStep() {
                   Quote for {build.customer.name} ({build.customer.email})
                 </Typography>
               )}
-            </Section>
-            <Section title="Fit report">
+            </ReviewSection>
+            <ReviewSection title="Fit report">
               <FitReportPanel report={preview.data.fitReport} headingLevel="h3" />
-            </Section>
-            <Section title="Price">
+            </ReviewSection>
+            <ReviewSection title="Price">
               <PriceBreakdown
                 price={preview.data.price}
                 validUntilDate={preview.data.validUntilDate}
                 caption="The price of your build, line by line"
               />
-            </Section>
+            </ReviewSection>
           </>
         )
       )}

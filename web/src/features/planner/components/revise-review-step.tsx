@@ -10,7 +10,7 @@ import Typography from '@mui/material/Typography';
 import SendOutlined from '@mui/icons-material/SendOutlined';
 import { useQuery } from '@tanstack/react-query';
 import { Formik, useFormikContext } from 'formik';
-import { useEffect, useId, useMemo, useState, type ReactNode } from 'react';
+import { useEffect, useId, useMemo, useState } from 'react';
 import { useNavigate } from 'react-router';
 import { FitReportPanel } from '@/components/quote/fit-report-panel';
 import { PriceBreakdown } from '@/components/quote/price-breakdown';
@@ -40,6 +40,7 @@ import {
 } from '../forms/revision';
 import { usePlanner } from '../hooks/use-planner';
 import { PlannerStep } from './planner-step';
+import { ReviewSection, errorText } from './review-section';
 
 /** Set on the desk's quote page after a revision is saved: which version is new. */
 export interface RevisedState {
@@ -53,25 +54,6 @@ const kindWords: Record<BuildItem['kind'], string> = {
   component: 'Part',
   service: 'Workshop service',
 };
-
-/** An API error in words: its message, then every field message. */
-function errorText(error: unknown): string {
-  if (!isApiError(error)) return 'Something went wrong. Please try again.';
-  const details = Object.values(error.fieldErrors).flat();
-  return details.length > 0 ? details.join(' ') : error.message;
-}
-
-function Section({ title, children }: { title: string; children: ReactNode }) {
-  const id = useId();
-  return (
-    <Box component="section" aria-labelledby={id}>
-      <Typography id={id} variant="h2" sx={{ mb: 1.5 }}>
-        {title}
-      </Typography>
-      {children}
-    </Box>
-  );
-}
 
 function latestVersionOf(quote: Quote | undefined): QuoteVersion | undefined {
   return quote ? [...quote.versions].sort((a, b) => b.number - a.number)[0] : undefined;
@@ -257,7 +239,7 @@ function ReviseReviewContent({ save }: { save: ReturnType<typeof useReviseQuote>
       }
     >
       <KeepBuildInStep />
-      <Section title="The vehicle">
+      <ReviewSection title="The vehicle">
         <Typography sx={{ fontWeight: 500 }}>
           {build.vehicleName}
           {build.year ? `, ${build.year}` : ''}
@@ -271,9 +253,9 @@ function ReviseReviewContent({ save }: { save: ReturnType<typeof useReviseQuote>
             Quote {build.revision?.reference} for {build.customer.name} ({build.customer.email})
           </Typography>
         )}
-      </Section>
+      </ReviewSection>
 
-      <Section title="Lines">
+      <ReviewSection title="Lines">
         <Typography variant="body2" color="text.secondary" sx={{ mb: 1 }}>
           Swap a part on the earlier steps. Labour is per unit; each line starts from the minutes
           saved on version {build.revision?.baseVersionNumber}.
@@ -284,9 +266,9 @@ function ReviseReviewContent({ save }: { save: ReturnType<typeof useReviseQuote>
             return item ? <LineFields key={line.productId} item={item} index={index} /> : null;
           })}
         </Box>
-      </Section>
+      </ReviewSection>
 
-      <Section title="Discount and reason">
+      <ReviewSection title="Discount and reason">
         <Box sx={{ display: 'grid', gap: 2, gridTemplateColumns: 'minmax(0, 1fr)' }}>
           <FormTextField
             name="discount"
@@ -307,7 +289,7 @@ function ReviseReviewContent({ save }: { save: ReturnType<typeof useReviseQuote>
             helperText={`The customer reads this with the new version. ${reasonLength}/${REASON_MAX_LENGTH} characters.`}
           />
         </Box>
-      </Section>
+      </ReviewSection>
 
       {preview.isPending ? (
         <Box role="status" sx={{ display: 'flex', gap: 1.5, alignItems: 'center' }}>
@@ -330,24 +312,24 @@ function ReviseReviewContent({ save }: { save: ReturnType<typeof useReviseQuote>
         preview.data && (
           <>
             {base && (
-              <Section title={`Version ${base.number} → version ${nextNumber}`}>
+              <ReviewSection title={`Version ${base.number} → version ${nextNumber}`}>
                 <Card variant="outlined">
                   <CardContent aria-live="polite">
                     <ChangeSummary base={base} next={preview.data.price} />
                   </CardContent>
                 </Card>
-              </Section>
+              </ReviewSection>
             )}
-            <Section title="Fit report">
+            <ReviewSection title="Fit report">
               <FitReportPanel report={preview.data.fitReport} headingLevel="h3" />
-            </Section>
-            <Section title="Price">
+            </ReviewSection>
+            <ReviewSection title="Price">
               <PriceBreakdown
                 price={preview.data.price}
                 validUntilDate={preview.data.validUntilDate}
                 caption={`Version ${nextNumber}, line by line`}
               />
-            </Section>
+            </ReviewSection>
           </>
         )
       )}
