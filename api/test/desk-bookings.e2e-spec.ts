@@ -6,7 +6,7 @@ import { HoldSweeperService } from '../src/bookings/hold-sweeper.service';
 import { ReminderSweeperService } from '../src/bookings/reminder-sweeper.service';
 import { DEMO_CUSTOMER_VEHICLE } from '../src/database/seeders/demo-vehicle-models.data';
 import { demoUser, registerCustomer, signInAs, type Session } from './support/sessions';
-import { tyreOnlyPackage } from './support/packages';
+import { deleteQuotesAndBookings, tyreOnlyPackage } from './support/packages';
 import { startTestApp, type TestApp } from './support/test-app';
 
 interface StartOption {
@@ -244,15 +244,7 @@ describe('desk bookings: audit trail, roles, top-ups, re-planning and reminders'
   afterAll(async () => {
     // Leave no mail behind: the next spec's application would have to deliver it.
     await testApp.outboxIdle(25_000);
-    const bookings = `select b.id from booking b join quote_version v on v.id = b.quote_version_id
-                       where v.quote_id = any($1::uuid[])`;
-    await testApp.db.query(
-      `delete from refund where payment_id in (select id from payment where booking_id in (${bookings}))`,
-      [madeQuotes],
-    );
-    await testApp.db.query(`delete from payment where booking_id in (${bookings})`, [madeQuotes]);
-    await testApp.db.query(`delete from booking where id in (${bookings})`, [madeQuotes]);
-    await testApp.db.query('delete from quote where id = any($1::uuid[])', [madeQuotes]);
+    await deleteQuotesAndBookings(testApp.db, madeQuotes);
     await testApp.close();
   });
 

@@ -11,7 +11,7 @@ import {
   signInAs,
   type Session,
 } from './support/sessions';
-import { tyreOnlyPackage } from './support/packages';
+import { deleteQuotesAndBookings, tyreOnlyPackage } from './support/packages';
 import { startTestApp, type TestApp } from './support/test-app';
 
 interface StartOption {
@@ -234,15 +234,7 @@ describe('payments: deposit checkout, webhooks, refunds and receipts', () => {
     // Leave no mail behind: the next spec's application would have to deliver it.
     await testApp.outboxIdle(25_000);
     await setPolicy(48, 0);
-    const bookings = `select b.id from booking b join quote_version v on v.id = b.quote_version_id
-                       where v.quote_id = any($1::uuid[])`;
-    await testApp.db.query(
-      `delete from refund where payment_id in (select id from payment where booking_id in (${bookings}))`,
-      [madeQuotes],
-    );
-    await testApp.db.query(`delete from payment where booking_id in (${bookings})`, [madeQuotes]);
-    await testApp.db.query(`delete from booking where id in (${bookings})`, [madeQuotes]);
-    await testApp.db.query('delete from quote where id = any($1::uuid[])', [madeQuotes]);
+    await deleteQuotesAndBookings(testApp.db, madeQuotes);
     await testApp.close();
   });
 

@@ -1,6 +1,7 @@
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
 import { getJson, postJson } from './session';
+import { paymentsUrl } from './env';
 
 /**
  * Set-up shared by the journeys that start from a held booking: a new customer, a saved quote
@@ -132,4 +133,36 @@ export async function holdFirstFreeTime(page: Page, quoteId: string): Promise<st
   await covers.getByRole('button', { name: 'Hold this time' }).click();
   await page.waitForURL(/\/account\/bookings\/[0-9a-f-]{36}$/);
   return new URL(page.url()).pathname.split('/').pop() as string;
+}
+
+/**
+ * Pays the held booking's deposit the way a customer would, through the payments stand-in (its
+ * test card that pays), and waits until the provider's notification has made it `requested`.
+ */
+export async function payDepositThroughStandIn(page: Page, bookingId: string): Promise<void> {
+  const checkout = await postJson<{ checkoutUrl: string }>(
+    page,
+    `/api/bookings/${bookingId}/deposit-checkout`,
+    {},
+  );
+  expect(checkout.status, JSON.stringify(checkout.body)).toBe(201);
+  const sessionId = new URL(checkout.body.checkoutUrl).pathname.split('/').pop() ?? '';
+  expect(sessionId).toMatch(/^cs_test_/);
+  expect(paymentsUrl, 'E2E_PAYMENTS_URL names the payments stand-in').not.toBe('');
+  const paid = await fetch(`${paymentsUrl}/__fake/pay/${sessionId}`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    // The stand-in's test card that pays (fakes/payments/README.md).
+    body: JSON.stringify({ card: '4242424242424242' }),
+  });
+  expect(paid.status, await paid.clone().text()).toBe(200);
+  await expect
+    .poll(
+      async () => {
+        const booking = await getJson<{ state: string }>(page, `/api/bookings/${bookingId}`);
+        return booking.body.state;
+      },
+      { timeout: 30_000, interval: 500 },
+    )
+    .toBe('requested');
 }

@@ -1,15 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { holdFirstFreeTime, newCustomerWithSavedQuote } from '../support/booking-setup';
+import {
+  holdFirstFreeTime,
+  newCustomerWithSavedQuote,
+  payDepositThroughStandIn,
+} from '../support/booking-setup';
 import { newPage } from '../support/browser';
 import { journey } from '../support/journey';
-import { demoUsers, paymentsUrl } from '../support/env';
-import { getJson, postJson, signIn } from '../support/session';
+import { demoUsers } from '../support/env';
+import { getJson, signIn } from '../support/session';
 
 const JOURNEY = 'desk-day-board';
-
-/** The payments stand-in's test card that pays (fakes/payments/README.md). */
-const CARD_PAYS = '4242424242424242';
 
 interface StartOption {
   startUtc: string;
@@ -85,27 +86,7 @@ function clockPattern(localTime: string): RegExp {
 async function newRequestedBooking(page: Page): Promise<Booking> {
   const { quote } = await newCustomerWithSavedQuote(page, 'board', 'Tamsin Voller');
   const bookingId = await holdFirstFreeTime(page, quote.id);
-  const checkout = await postJson<{ checkoutUrl: string }>(
-    page,
-    `/api/bookings/${bookingId}/deposit-checkout`,
-    {},
-  );
-  expect(checkout.status, JSON.stringify(checkout.body)).toBe(201);
-  const sessionId = new URL(checkout.body.checkoutUrl).pathname.split('/').pop() ?? '';
-  expect(sessionId).toMatch(/^cs_test_/);
-  expect(paymentsUrl, 'E2E_PAYMENTS_URL names the payments stand-in').not.toBe('');
-  const paid = await fetch(`${paymentsUrl}/__fake/pay/${sessionId}`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ card: CARD_PAYS }),
-  });
-  expect(paid.status, await paid.clone().text()).toBe(200);
-  await expect
-    .poll(async () => (await readBooking(page, bookingId)).state, {
-      timeout: 30_000,
-      interval: 500,
-    })
-    .toBe('requested');
+  await payDepositThroughStandIn(page, bookingId);
   return readBooking(page, bookingId);
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
-import { holdFirstFreeTime } from '../support/booking-setup';
+import { holdFirstFreeTime, payDepositThroughStandIn } from '../support/booking-setup';
 import { newPage } from '../support/browser';
 import { baseUrl, demoUsers, paymentsUrl } from '../support/env';
 import { waitForMessage } from '../support/inbox';
@@ -152,27 +152,7 @@ async function newRequestedAlignmentBooking(page: Page) {
   expect(versionOf(saved.body, 1).bookable).toBe(true);
 
   const bookingId = await holdFirstFreeTime(page, saved.body.id);
-  const checkout = await postJson<{ checkoutUrl: string }>(
-    page,
-    `/api/bookings/${bookingId}/deposit-checkout`,
-    {},
-  );
-  expect(checkout.status, JSON.stringify(checkout.body)).toBe(201);
-  const sessionId = new URL(checkout.body.checkoutUrl).pathname.split('/').pop() ?? '';
-  expect(sessionId).toMatch(/^cs_test_/);
-  expect(paymentsUrl, 'E2E_PAYMENTS_URL names the payments stand-in').not.toBe('');
-  const paid = await fetch(`${paymentsUrl}/__fake/pay/${sessionId}`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ card: CARD_PAYS.replace(/ /g, '') }),
-  });
-  expect(paid.status, await paid.clone().text()).toBe(200);
-  await expect
-    .poll(async () => (await readBooking(page, bookingId)).state, {
-      timeout: 30_000,
-      interval: 500,
-    })
-    .toBe('requested');
+  await payDepositThroughStandIn(page, bookingId);
   return { customer, quote: saved.body, booking: await readBooking(page, bookingId), tyre };
 }
 

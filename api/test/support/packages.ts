@@ -1,3 +1,4 @@
+import type { Pool } from 'pg';
 import request from 'supertest';
 import { expect } from 'vitest';
 import { vehicleModelId } from './catalogue';
@@ -22,4 +23,20 @@ export async function tyreOnlyPackage(testApp: TestApp): Promise<object> {
     constantLoadKg: 0,
     items: [{ productId: tyre!.id, quantity: 4 }],
   };
+}
+
+/**
+ * Deletes the quotes a spec made, with their bookings' refunds, payments and bookings (their
+ * reservations and audit events go with the booking).
+ */
+export async function deleteQuotesAndBookings(db: Pool, quoteIds: string[]): Promise<void> {
+  const bookings = `select b.id from booking b join quote_version v on v.id = b.quote_version_id
+                     where v.quote_id = any($1::uuid[])`;
+  await db.query(
+    `delete from refund where payment_id in (select id from payment where booking_id in (${bookings}))`,
+    [quoteIds],
+  );
+  await db.query(`delete from payment where booking_id in (${bookings})`, [quoteIds]);
+  await db.query(`delete from booking where id in (${bookings})`, [quoteIds]);
+  await db.query('delete from quote where id = any($1::uuid[])', [quoteIds]);
 }

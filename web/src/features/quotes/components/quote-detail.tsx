@@ -10,6 +10,7 @@ import useMediaQuery from '@mui/material/useMediaQuery';
 import { useTheme } from '@mui/material/styles';
 import { useQuery } from '@tanstack/react-query';
 import { useId, useState, type ReactNode } from 'react';
+import { PhotoThumbnails } from '@/components/quote/photo-thumbnails';
 import { formatWholeNumber } from '@/lib/format';
 import type { Quote, QuoteVersion, VehicleUse } from '@/types/api';
 import { workshopQueryOptions } from '../api/get-workshop';
@@ -23,8 +24,6 @@ const useWords: Record<VehicleUse, string> = {
   towing: 'towing',
   'off-road': 'off-road',
 };
-
-const photoKindWords = { vehicle: 'Vehicle photo', 'tyre-placard': 'Tyre placard photo' } as const;
 
 interface Props {
   quote: Quote;
@@ -101,31 +100,7 @@ export function QuoteDetail({ quote, viewer, versionActions }: Props) {
           <Typography id={photosHeadingId} variant="h2" sx={{ mb: 1.5 }}>
             Photos
           </Typography>
-          <Box
-            component="ul"
-            sx={{ listStyle: 'none', p: 0, m: 0, display: 'flex', flexWrap: 'wrap', gap: 1.5 }}
-          >
-            {quote.photos.map((photo, index) => (
-              <li key={photo.id}>
-                <Link href={photo.url} target="_blank" rel="noopener" sx={{ display: 'block' }}>
-                  <Box
-                    component="img"
-                    src={photo.thumbnailUrl}
-                    alt={`${photoKindWords[photo.kind]} ${index + 1} (opens the full size)`}
-                    width={128}
-                    height={128}
-                    sx={{
-                      display: 'block',
-                      objectFit: 'cover',
-                      borderRadius: 2,
-                      border: 1,
-                      borderColor: 'divider',
-                    }}
-                  />
-                </Link>
-              </li>
-            ))}
-          </Box>
+          <PhotoThumbnails photos={quote.photos} sizePx={128} />
         </Box>
       )}
 
